@@ -1,0 +1,55 @@
+package org.plenum.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.plenum.app.Demo;
+import org.plenum.store.Summary;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+
+@Command(name = "demo", mixinStandardHelpOptions = true,
+        description = "Build the demo workspace from the invented scenario in demo-data/ and show what it holds.")
+final class DemoCommand implements Callable<Integer> {
+    @ParentCommand
+    PlenumCommand root;
+
+    @Option(names = "--no-tui", description = "Never open a screen: print what the workspace holds.")
+    boolean noTui;
+
+    @Option(names = "--data", paramLabel = "DIR", description = "The scenario's CSV files (default: demo-data in the"
+            + " Plenum folder).")
+    Path data;
+
+    @Option(names = "--db", paramLabel = "PATH", description = "Where to build it (default: meetings/demo.db in the"
+            + " Plenum folder).")
+    Path db;
+
+    @Override
+    public Integer call() {
+        Path home = Path.of(root.env.getOrDefault("PLENUM_HOME", System.getProperty("plenum.home", ".")));
+        Path dataDir = data != null ? data : home.resolve("demo-data");
+        Path target = db != null ? db : home.resolve("meetings").resolve("demo.db");
+        Demo.Built built = Demo.build(root.workspaces, dataDir, target);
+        print(built, root.spec.commandLine().getOut());
+        return ExitCodes.OK;
+    }
+
+    static void print(Demo.Built built, PrintWriter out) {
+        Summary s = built.summary();
+        out.println((built.rebuilt() ? "built " : "up to date: ") + built.db());
+        out.printf("  items      %,d in %d groups and %d regions%n", s.items(), s.groups(), s.regions());
+        out.printf("  actuals    %,d (%s periods %s to %s)%n", s.actuals(), s.frequency().word(), s.firstActual(),
+                s.lastActual());
+        out.printf("  forecasts  cycles %s to %s:%n", s.firstCycle(), s.lastCycle());
+        for (Map.Entry<String, Integer> e : s.forecastsByStep().entrySet()) {
+            out.printf("             %-8s %,d%n", e.getKey(), e.getValue());
+        }
+        out.printf("  events     %,d%n", s.events());
+        out.printf("  ledger     %,d decisions over %d cycles%n", s.decisions(), s.decidedCycles());
+        out.println("The meeting screen is not built yet. Meanwhile, log a decision with plenum decide and export");
+        out.println("the ledger with plenum export ledger (add --db " + built.db() + ").");
+    }
+}
