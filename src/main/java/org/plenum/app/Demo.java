@@ -68,6 +68,15 @@ public final class Demo {
         }
     }
 
+    /** Writes the scenario's files afresh; the generator's fixed seed makes them identical each time. */
+    public static void regenerate(Path dataDir) {
+        try {
+            org.plenum.demo.DemoScenario.writeTo(dataDir);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
     /** Past decisions go in through the ledger like any other, one batch per item, cycle and author. */
     private static void appendPastDecisions(Workspace ws, Path file) {
         Catalog catalog = ws.catalog();

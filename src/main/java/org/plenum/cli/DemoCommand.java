@@ -19,6 +19,10 @@ final class DemoCommand implements Callable<Integer> {
     @Option(names = "--no-tui", description = "Never open a screen: print what the workspace holds.")
     boolean noTui;
 
+    @Option(names = "--regenerate", description = "Write demo-data/*.csv afresh from the scenario generator (fixed"
+            + " seed) before building.")
+    boolean regenerate;
+
     @Option(names = "--data", paramLabel = "DIR", description = "The scenario's CSV files (default: demo-data in the"
             + " Plenum folder).")
     Path data;
@@ -32,6 +36,10 @@ final class DemoCommand implements Callable<Integer> {
         Path home = Path.of(root.env.getOrDefault("PLENUM_HOME", System.getProperty("plenum.home", ".")));
         Path dataDir = data != null ? data : home.resolve("demo-data");
         Path target = db != null ? db : home.resolve("meetings").resolve("demo.db");
+        if (regenerate) {
+            Demo.regenerate(dataDir);
+            root.spec.commandLine().getOut().println("wrote the demo scenario to " + dataDir);
+        }
         Demo.Built built = Demo.build(root.workspaces, dataDir, target);
         print(built, root.spec.commandLine().getOut());
         return ExitCodes.OK;
@@ -45,7 +53,11 @@ final class DemoCommand implements Callable<Integer> {
                 s.lastActual());
         out.printf("  forecasts  cycles %s to %s:%n", s.firstCycle(), s.lastCycle());
         for (Map.Entry<String, Integer> e : s.forecastsByStep().entrySet()) {
-            out.printf("             %-8s %,d%n", e.getKey(), e.getValue());
+            if (e.getKey().equals(s.ledgerStep())) {
+                out.printf("             %-8s from the decision ledger%n", e.getKey());
+            } else {
+                out.printf("             %-8s %,d%n", e.getKey(), e.getValue());
+            }
         }
         out.printf("  events     %,d%n", s.events());
         out.printf("  ledger     %,d decisions over %d cycles%n", s.decisions(), s.decidedCycles());

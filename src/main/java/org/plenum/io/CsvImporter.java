@@ -225,6 +225,7 @@ public final class CsvImporter {
                 }
             }
             handOver(batch);
+            progress.advance(source.bytes().bytesRead());
         }
 
         private void readOne(CSVRecord csv, int line, List<R> batch) {

@@ -60,8 +60,12 @@ final class Record {
 
     Period period(String column) throws FieldException {
         String value = text(column);
+        Period known = periods.seen.get(value);
+        if (known != null) {
+            return known;
+        }
         try {
-            return periods.check(Period.parse(value));
+            return periods.check(value, Period.parse(value));
         } catch (ValueException e) {
             throw fail(column, e.expected(), value);
         }
@@ -86,19 +90,22 @@ final class Record {
     static final class Periods {
         private Frequency frequency;
         private final boolean fixed;
+        /** A file names few distinct periods many times over; each is parsed and checked once. */
+        private final java.util.Map<String, Period> seen = new java.util.HashMap<>();
 
         Periods(Frequency frequency) {
             this.frequency = frequency;
             this.fixed = frequency != null;
         }
 
-        Period check(Period p) {
+        Period check(String text, Period p) {
             if (frequency == null) {
                 frequency = p.frequency();
             } else if (p.frequency() != frequency) {
                 throw new ValueException("a " + frequency.word() + " period " + frequency.pattern() + " as "
                         + (fixed ? "everywhere in this workspace" : "earlier in this file"));
             }
+            seen.put(text, p);
             return p;
         }
 

@@ -16,7 +16,7 @@ import org.plenum.core.Period;
  * @param firstActual first period with an actual, or {@code null}
  * @param lastCycle latest cycle with forecasts, or {@code null}
  */
-public record Summary(Frequency frequency, int items, int groups, int regions, int actuals, Period firstActual,
+public record Summary(Frequency frequency, String ledgerStep, int items, int groups, int regions, int actuals, Period firstActual,
         Period lastActual, Map<String, Integer> forecastsByStep, Period firstCycle, Period lastCycle, int events,
         int decisions, int decidedCycles) {
 
@@ -29,7 +29,7 @@ public record Summary(Frequency frequency, int items, int groups, int regions, i
                 byStep.put(rs.getString(1), rs.getInt(2));
             }
         }
-        return new Summary(f, count(c, "SELECT count(*) FROM items"),
+        return new Summary(f, Meta.get(c, Meta.LEDGER_STEP).orElse(""), count(c, "SELECT count(*) FROM items"),
                 count(c, "SELECT count(DISTINCT item_group) FROM items"),
                 count(c, "SELECT count(DISTINCT region) FROM items"), count(c, "SELECT count(*) FROM actuals"),
                 period(c, f, "SELECT min(period) FROM actuals"), period(c, f, "SELECT max(period) FROM actuals"),
