@@ -4,7 +4,19 @@ package org.plenum.core;
 final class PeriodParser {
     private PeriodParser() {}
 
+    /** Demand history and forecasts lie in these years; anything else is a typo such as 0026. */
+    static final int FIRST_YEAR = 1900;
+    static final int LAST_YEAR = 2999;
+
     static Period parse(String text) {
+        Period p = parseAnyYear(text);
+        if (p.year() < FIRST_YEAR || p.year() > LAST_YEAR) {
+            throw new ValueException("a period in the years " + FIRST_YEAR + " to " + LAST_YEAR);
+        }
+        return p;
+    }
+
+    private static Period parseAnyYear(String text) {
         if (text != null && text.length() == 7 && digits(text, 0, 4) && text.charAt(4) == '-' && digits(text, 5, 7)) {
             int month = Integer.parseInt(text.substring(5, 7));
             if (month >= 1 && month <= 12) {

@@ -59,10 +59,10 @@ public final class CsvImporter {
         try (Utf8CheckedInputStream bytes = open(file);
                 CSVParser parser = CSVParser.builder().setReader(reader(bytes)).setFormat(FORMAT).get()) {
             Iterator<CSVRecord> records = parser.iterator();
-            Header header = readHeader(kind, records, errors, name);
+            Header header = readHeader(kind, file, records, errors);
             errors.throwIfAny();
             progress.start(Files.size(file));
-            long rows = load(kind, header, new Source(parser, records, bytes), errors, replace);
+            long rows = load(kind, header, new Source(file, parser, records, bytes), errors, replace);
             return new ImportResult(kind, file, rows, Duration.ofNanos(System.nanoTime() - started));
         } catch (NoSuchFileException e) {
             throw new BadInputException(name + ": no such file");
@@ -86,10 +86,10 @@ public final class CsvImporter {
         return new InputStreamReader(in, StandardCharsets.UTF_8);
     }
 
-    private static Header readHeader(ImportKind kind, Iterator<CSVRecord> records, ImportErrors errors, String name) {
-        Source.Failure failure = Source.failure(() -> records.hasNext());
+    private static Header readHeader(ImportKind kind, Path file, Iterator<CSVRecord> records, ImportErrors errors) {
+        Source.Failure failure = Source.failure(file, () -> records.hasNext());
         if (failure != null) {
-            errors.add(failure.line(), failure.column(), failure.message());
+            errors.add(Math.max(failure.line(), 1), failure.column(), failure.message());
             return null;
         }
         if (!records.hasNext()) {
@@ -108,7 +108,7 @@ public final class CsvImporter {
         try (ImportSession session = workspace.beginImport(replace)) {
             ReadingThread<R> reading = new ReadingThread<>(rows, header, periods, source, errors, progress);
             reading.start();
-            long written = write(rows, session, reading, errors);
+            long written = write(rows, header.position(rows.keyColumn()) + 1, session, reading, errors);
             reading.await();
             if (written == 0 && !errors.any()) {
                 errors.add(source.lastLine(), 1, "expected at least one data row after the header, found none");
@@ -122,13 +122,13 @@ public final class CsvImporter {
         }
     }
 
-    private static <R> long write(RowReader<R> rows, ImportSession session, ReadingThread<R> reading,
+    private static <R> long write(RowReader<R> rows, int keyColumn, ImportSession session, ReadingThread<R> reading,
             ImportErrors errors) {
         long written = 0;
         try {
             for (List<R> batch = reading.next(); batch != null; batch = reading.next()) {
                 for (int line : rows.write(session, batch)) {
-                    errors.add(line, 1, "expected an " + rows.keyWords() + " not yet in the workspace, found one it"
+                    errors.add(line, keyColumn, "expected an " + rows.keyWords() + " not yet in the workspace, found one it"
                             + " already holds (use --replace to overwrite it)");
                 }
                 written += batch.size();
@@ -141,7 +141,7 @@ public final class CsvImporter {
     }
 
     /** The parser with what it has read so far. */
-    record Source(CSVParser parser, Iterator<CSVRecord> records, Utf8CheckedInputStream bytes) {
+    record Source(Path file, CSVParser parser, Iterator<CSVRecord> records, Utf8CheckedInputStream bytes) {
         /** A failure of the input itself: bad quoting or a byte that is not UTF-8. */
         record Failure(int line, int column, String message) {}
 
@@ -150,7 +150,7 @@ public final class CsvImporter {
         }
 
         /** Runs one read step; returns its failure instead of throwing, or null when it went well. */
-        static Failure failure(Runnable step) {
+        static Failure failure(Path file, Runnable step) {
             try {
                 step.run();
                 return null;
@@ -158,7 +158,12 @@ public final class CsvImporter {
                 if (e.getCause() instanceof Utf8CheckedInputStream.MalformedUtf8Exception m) {
                     return new Failure(m.line, m.column, "expected UTF-8 text, found " + m.found);
                 }
-                return new Failure(0, 1, "expected well-formed CSV quoting, found: " + e.getCause().getMessage());
+                String message = e.getCause().getMessage();
+                int line = QuotingProblem.line(message);
+                int column = line == 0 ? 1 : QuotingProblem.field(file, line);
+                return new Failure(line, column, QuotingProblem.unterminated(message)
+                        ? "expected a closing quote for the field opened here, found the end of the file"
+                        : "expected a comma or the end of the line after a closing quote, found more text");
             }
         }
     }
@@ -174,7 +179,7 @@ public final class CsvImporter {
         private final Progress progress;
         private final BlockingQueue<List<?>> queue = new ArrayBlockingQueue<>(4);
         private final AtomicBoolean cancelled = new AtomicBoolean();
-        private final AtomicReference<RuntimeException> crash = new AtomicReference<>();
+        private final AtomicReference<Throwable> crash = new AtomicReference<>();
 
         ReadingThread(RowReader<R> rows, Header header, Record.Periods periods, Source source, ImportErrors errors,
                 Progress progress) {
@@ -192,7 +197,8 @@ public final class CsvImporter {
         public void run() {
             try {
                 readAll();
-            } catch (RuntimeException e) {
+            } catch (Throwable e) {
+                // Even an Error must fail the import: the end marker alone would commit a partial file.
                 crash.set(e);
             } finally {
                 hand(END);
@@ -203,7 +209,7 @@ public final class CsvImporter {
             List<R> batch = new ArrayList<>(BATCH);
             int previousEnd = source.lastLine();
             while (!cancelled.get()) {
-                Source.Failure failure = Source.failure(() -> source.records().hasNext());
+                Source.Failure failure = Source.failure(source.file(), () -> source.records().hasNext());
                 if (failure != null) {
                     errors.add(failure.line() == 0 ? previousEnd + 1 : failure.line(), failure.column(),
                             failure.message());
@@ -230,7 +236,7 @@ public final class CsvImporter {
 
         private void readOne(CSVRecord csv, int line, List<R> batch) {
             if (csv.size() != header.width()) {
-                errors.add(line, Math.min(csv.size(), header.width()) + (csv.size() > header.width() ? 1 : 0),
+                errors.add(line, Math.min(csv.size(), header.width()) + 1,
                         "expected " + header.width() + " fields as in the header, found " + csv.size());
                 return;
             }
@@ -268,9 +274,15 @@ public final class CsvImporter {
             try {
                 List<?> item = queue.take();
                 if (item == END) {
-                    RuntimeException e = crash.get();
+                    Throwable e = crash.get();
+                    if (e instanceof RuntimeException r) {
+                        throw r;
+                    }
+                    if (e instanceof Error error) {
+                        throw error;
+                    }
                     if (e != null) {
-                        throw e;
+                        throw new IllegalStateException("reading failed", e);
                     }
                     return null;
                 }

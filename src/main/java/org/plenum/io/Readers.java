@@ -173,14 +173,25 @@ final class Readers {
             throw r.fail("step", "one of the imported steps " + imported + ledger, name);
         }
 
-        /** Item, step, cycle and period packed into 64 bits: 22, 6, 18 and 18. */
+        /**
+         * Item, step, cycle and period packed into 64 bits: 22, 6, 18 and 18. Periods of the years
+         * 1900–2999 (all that parsing accepts) fit once shifted: weeks from 1900 have indexes down
+         * to about −3,650, months up to 2999 about 36,000.
+         */
         private static long key(int item, Step step, Period cycle, Period period) {
-            if (item >= 1 << 22 || step.id() >= 1 << 6 || cycle.index() >= 1 << PERIOD_BITS
-                    || period.index() >= 1 << PERIOD_BITS || cycle.index() < 0) {
+            if (item >= 1 << 22 || step.id() >= 1 << 6) {
                 throw new IllegalStateException("forecast key out of the packed range: item " + item);
             }
-            return ((long) item << 42) | ((long) step.id() << 36) | ((long) cycle.index() << PERIOD_BITS)
-                    | period.index();
+            return ((long) item << 42) | ((long) step.id() << 36) | ((long) packed(cycle) << PERIOD_BITS)
+                    | packed(period);
+        }
+
+        private static int packed(Period p) {
+            int shifted = p.index() + (1 << 12);
+            if (shifted < 0 || shifted >= 1 << PERIOD_BITS) {
+                throw new IllegalStateException("period out of the packed range: " + p);
+            }
+            return shifted;
         }
 
         @Override

@@ -14,6 +14,7 @@ final class Utf8CheckedInputStream extends FilterInputStream {
     private int line = 1;
     private int column = 1;
     private int pending;
+    private int lead;
     private int lowerBound = 0x80;
     private int upperBound = 0xBF;
 
@@ -37,7 +38,7 @@ final class Utf8CheckedInputStream extends FilterInputStream {
         int n = super.read(b, off, len);
         if (n == -1) {
             if (pending > 0) {
-                throw new MalformedUtf8Exception(line, column, "the file ends inside a multi-byte character");
+                throw new MalformedUtf8Exception(line, column, String.format("byte 0x%02X and then the end of the file", lead));
             }
             return -1;
         }
@@ -48,23 +49,34 @@ final class Utf8CheckedInputStream extends FilterInputStream {
         return n;
     }
 
-    /** Unicode 15 table 3-7: well-formed UTF-8 byte sequences, including the limits on second bytes. */
+    /**
+     * Unicode 15 table 3-7: well-formed UTF-8 byte sequences, including the limits on second
+     * bytes. {@code column} is the position of the character being read, so an error names the
+     * lead byte of a broken sequence where it stands.
+     */
     private void check(int b) throws MalformedUtf8Exception {
         if (pending > 0) {
             if (b < lowerBound || b > upperBound) {
-                throw bad(b);
+                throw bad(lead);
             }
             lowerBound = 0x80;
             upperBound = 0xBF;
-            pending--;
+            if (--pending == 0) {
+                column++;
+            }
             return;
         }
         if (b < 0x80) {
             if (b == '\n') {
                 line++;
-                column = 0;
+                column = 1;
+            } else {
+                column++;
             }
-        } else if (b >= 0xC2 && b <= 0xDF) {
+            return;
+        }
+        lead = b;
+        if (b >= 0xC2 && b <= 0xDF) {
             pending = 1;
         } else if (b >= 0xE0 && b <= 0xEF) {
             pending = 2;
@@ -77,7 +89,6 @@ final class Utf8CheckedInputStream extends FilterInputStream {
         } else {
             throw bad(b);
         }
-        column++;
     }
 
     private MalformedUtf8Exception bad(int b) {

@@ -79,7 +79,7 @@ class PeriodTest {
 
     @ParameterizedTest
     @ValueSource(strings = {"2026-13", "2026-00", "2025-W53", "2026-W54", "2026-W00", "2026-3", "26-03", "2026/03",
-        " 2026-03", "2026-w05", "2026-W5", "", "2026-03-01"})
+        " 2026-03", "2026-w05", "2026-W5", "", "2026-03-01", "0026-03", "3026-W09"})
     void refusesMalformedPeriods(String text) {
         ValueException e = assertThrows(ValueException.class, () -> Period.parse(text));
         assertTrue(e.expected().contains("period") || e.expected().contains("month") || e.expected().contains("week"));
