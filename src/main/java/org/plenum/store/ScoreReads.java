@@ -1,6 +1,7 @@
 package org.plenum.store;
 
 import java.sql.Connection;
+import org.plenum.core.Series;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;

@@ -1,4 +1,4 @@
-package org.plenum.store;
+package org.plenum.core;
 
 import java.util.Arrays;
 
@@ -9,13 +9,13 @@ import java.util.Arrays;
  */
 public record Series(int[] items, int[] periods, long[] quantities, int size) {
 
-    static final class Builder {
+    public static final class Builder {
         private int[] items = new int[1024];
         private int[] periods = new int[1024];
         private long[] quantities = new long[1024];
         private int size;
 
-        void add(int item, int period, long quantity) {
+        public void add(int item, int period, long quantity) {
             if (size == items.length) {
                 items = Arrays.copyOf(items, size * 2);
                 periods = Arrays.copyOf(periods, size * 2);
@@ -26,7 +26,7 @@ public record Series(int[] items, int[] periods, long[] quantities, int size) {
             quantities[size++] = quantity;
         }
 
-        Series build() {
+        public Series build() {
             return new Series(items, periods, quantities, size);
         }
     }

@@ -1,0 +1,131 @@
+package org.plenum.app;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import org.plenum.core.Frequency;
+import org.plenum.core.Period;
+import java.util.function.Function;
+import org.plenum.core.ScoredChange;
+import org.plenum.score.BootstrapInterval;
+import org.plenum.score.DecisionLens;
+import org.plenum.score.LensGroup;
+import org.plenum.score.ReasonWords;
+import org.plenum.score.TimeAndMoney;
+import org.plenum.store.LensReads;
+import org.plenum.score.PairedSet;
+import org.plenum.score.Placebo;
+import org.plenum.score.Scorecard;
+import org.plenum.store.Catalog;
+import org.plenum.store.ScoreReads;
+import org.plenum.core.Series;
+import org.plenum.store.Workspace;
+
+/** Scores every step of the process at one lag against the placebo (DESIGN §5), optionally by group. */
+public final class Score {
+    /** Fields a scorecard can be broken down by, besides the free item attributes. */
+    static final List<String> PAIR_FIELDS = List.of("group", "region", "item", "cycle");
+    /** Fields only decisions have: the lens alone is broken down by them. */
+    static final List<String> DECISION_FIELDS = List.of("author", "tag", "reason", "direction", "size");
+
+    private Score() {}
+
+    /** The scorecard of all pairs and, when asked, one per value of the breakdown field; then the lens. */
+    public record Report(Scorecard all, String by, Map<String, Scorecard> groups, Lens lens) {}
+
+    /**
+     * The decision lens: the ledger's standing decisions by class and direction, the imported
+     * steps' changes by class, the decisions broken down by the {@code --by} field, time and money.
+     */
+    public record Lens(String ledgerStep, List<LensGroup> classes, List<LensGroup> directions,
+            List<LensGroup> importedClasses, List<LensGroup> by, TimeAndMoney time) {}
+
+    public static Report run(Workspaces workspaces, Path db, int lag, Placebo placebo, String by, int draws) {
+        try (Workspace ws = workspaces.open(db)) {
+            Catalog catalog = ws.catalog();
+            Frequency frequency = catalog.frequency();
+            if (frequency == null) {
+                throw new UsageException("the workspace holds no periods yet: import actuals and forecasts first");
+            }
+            ScoreReads reads = new ScoreReads(ws);
+            List<Series> steps = new ArrayList<>();
+            for (String step : catalog.stepNames()) {
+                steps.add(reads.stepAtLag(step, lag));
+            }
+            PairedSet set = PairedSet.of(reads.actuals(), catalog.stepNames(), steps, lag, placebo,
+                    frequency.seasonLength());
+            if (set.size() == 0) {
+                throw new UsageException("no scored pairs at lag " + lag + ": no (item, period) has an actual, the "
+                        + placebo.stepName() + " placebo and every step's forecast (" + set.leftOut() + " left out)");
+            }
+            if (by != null && !fields(reads).contains(by)) {
+                throw new UsageException("--by: expected one of " + String.join(", ", fields(reads)) + ", found \""
+                        + by + "\"");
+            }
+            BootstrapInterval bootstrap = BootstrapInterval.withDefaults().withDraws(draws);
+            Scorecard all = Scorecard.of(set, placebo, bootstrap);
+            Map<String, Scorecard> groups = by == null || DECISION_FIELDS.contains(by) ? Map.of()
+                    : breakdown(reads, set, placebo, bootstrap, by, frequency);
+            return new Report(all, by, groups, lens(ws, reads, by, frequency));
+        }
+    }
+
+    private static Map<String, Scorecard> breakdown(ScoreReads reads, PairedSet set, Placebo placebo,
+            BootstrapInterval bootstrap, String by, Frequency frequency) {
+        Map<String, List<Integer>> rowsByValue = new TreeMap<>();
+        if (by.equals("cycle")) {
+            for (int i = 0; i < set.size(); i++) {
+                String cycle = new Period(frequency, set.periods()[i] - set.lag()).toString();
+                rowsByValue.computeIfAbsent(cycle, k -> new ArrayList<>()).add(i);
+            }
+        } else {
+            Map<Integer, String> values = reads.attribute(by);
+            for (int i = 0; i < set.size(); i++) {
+                String value = values.getOrDefault(set.items()[i], "(none)");
+                rowsByValue.computeIfAbsent(value, k -> new ArrayList<>()).add(i);
+            }
+        }
+        Map<String, Scorecard> out = new LinkedHashMap<>();
+        rowsByValue.forEach((value, rows) -> out.put(value, Scorecard.of(set, placebo, bootstrap,
+                rows.stream().mapToInt(Integer::intValue).toArray(), 0)));
+        return out;
+    }
+
+    static List<String> fields(ScoreReads reads) {
+        List<String> all = new ArrayList<>(PAIR_FIELDS);
+        all.addAll(DECISION_FIELDS);
+        all.addAll(reads.attributeNames());
+        return all;
+    }
+
+    private static Lens lens(Workspace ws, ScoreReads reads, String by, Frequency frequency) {
+        LensReads lensReads = new LensReads(ws);
+        List<ScoredChange> decisions = lensReads.decisions();
+        List<ScoredChange> imported = lensReads.importedChanges();
+        DecisionLens lens = new DecisionLens(reads.actuals());
+        List<LensGroup> byField = by == null ? List.of() : lens.groups(decisions, keys(reads, by, frequency));
+        return new Lens(ws.catalog().ledgerStep(), lens.groups(decisions, c -> List.of(DecisionLens.sizeClass(c))),
+                lens.groups(decisions, c -> List.of(DecisionLens.direction(c))),
+                lens.groups(imported, c -> List.of(c.source() + " " + DecisionLens.sizeClass(c))), byField,
+                TimeAndMoney.of(decisions, lensReads.minutesByCycle().values(), reads.unitValues()));
+    }
+
+    /** How a decision is keyed for a breakdown; a reason counts under each of its words. */
+    private static Function<ScoredChange, List<String>> keys(ScoreReads reads, String by, Frequency frequency) {
+        return switch (by) {
+            case "author" -> c -> List.of(c.author());
+            case "tag" -> c -> List.of(c.tag());
+            case "reason" -> c -> ReasonWords.of(c.reason());
+            case "direction" -> c -> List.of(DecisionLens.direction(c));
+            case "size" -> c -> List.of(DecisionLens.sizeClass(c));
+            case "cycle" -> c -> List.of(new Period(frequency, c.cycle()).toString());
+            default -> {
+                Map<Integer, String> values = reads.attribute(by);
+                yield c -> List.of(values.getOrDefault(c.item(), "(none)"));
+            }
+        };
+    }
+}
