@@ -109,6 +109,10 @@ public final class ImportBenchmark {
                 + " step TEXT NOT NULL, quantity NUMERIC NOT NULL CHECK (quantity >= 0),"
                 + " PRIMARY KEY (item, step, cycle, period)) WITHOUT ROWID;\n"
                 + ".import --csv --skip 1 " + dir.resolve("forecasts.csv") + " forecasts\n";
+        return sqlite3(db, script);
+    }
+
+    private static long sqlite3(Path db, String script) {
         try {
             ProcessBuilder pb = new ProcessBuilder("sqlite3", "-batch", db.toString()).redirectErrorStream(true)
                     .redirectOutput(ProcessBuilder.Redirect.DISCARD);
@@ -128,6 +132,11 @@ public final class ImportBenchmark {
             Thread.currentThread().interrupt();
             throw new IllegalStateException(e);
         }
+    }
+
+    /** Times the sqlite3 shell running {@code sql} on {@code db}, output discarded; returns nanoseconds. */
+    public static long sqlite3Query(Path db, String sql) {
+        return sqlite3(db, sql);
     }
 
     public static boolean sqlite3Installed() {

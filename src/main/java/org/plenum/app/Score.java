@@ -33,17 +33,25 @@ public final class Score {
 
     private Score() {}
 
-    /** The scorecard of all pairs and, when asked, one per value of the breakdown field; then the lens. */
-    public record Report(Scorecard all, String by, Map<String, Scorecard> groups, Lens lens) {}
+    /** The scorecard of all pairs, one breakdown per field asked for, and the decision lens. */
+    public record Report(Scorecard all, List<Breakdown> breakdowns, Lens lens) {}
+
+    /**
+     * One field's breakdown: a scorecard per value (empty for fields only decisions have, such as
+     * author) and the lens over the decisions per value.
+     */
+    public record Breakdown(String field, Map<String, Scorecard> scorecards, List<LensGroup> lens) {}
 
     /**
      * The decision lens: the ledger's standing decisions by class and direction, the imported
-     * steps' changes by class, the decisions broken down by the {@code --by} field, time and money.
+     * steps' changes by class, time and money.
      */
     public record Lens(String ledgerStep, List<LensGroup> classes, List<LensGroup> directions,
-            List<LensGroup> importedClasses, List<LensGroup> by, TimeAndMoney time) {}
+            List<LensGroup> importedClasses, TimeAndMoney time) {}
 
-    public static Report run(Workspaces workspaces, Path db, int lag, Placebo placebo, String by, int draws) {
+    /** @param by breakdown fields, none when null or empty */
+    public static Report run(Workspaces workspaces, Path db, int lag, Placebo placebo, List<String> fields, int draws) {
+        List<String> by = fields == null ? List.of() : fields;
         try (Workspace ws = workspaces.open(db)) {
             Catalog catalog = ws.catalog();
             Frequency frequency = catalog.frequency();
@@ -51,25 +59,36 @@ public final class Score {
                 throw new UsageException("the workspace holds no periods yet: import actuals and forecasts first");
             }
             ScoreReads reads = new ScoreReads(ws);
+            for (String field : by) {
+                if (!fields(reads).contains(field)) {
+                    throw new UsageException("--by: expected one of " + String.join(", ", fields(reads)) + ", found \""
+                            + field + "\"");
+                }
+            }
+            Series actuals = reads.actuals();
             List<Series> steps = new ArrayList<>();
             for (String step : catalog.stepNames()) {
                 steps.add(reads.stepAtLag(step, lag));
             }
-            PairedSet set = PairedSet.of(reads.actuals(), catalog.stepNames(), steps, lag, placebo,
+            PairedSet set = PairedSet.of(actuals, catalog.stepNames(), steps, lag, placebo,
                     frequency.seasonLength());
             if (set.size() == 0) {
                 throw new UsageException("no scored pairs at lag " + lag + ": no (item, period) has an actual, the "
                         + placebo.stepName() + " placebo and every step's forecast (" + set.leftOut() + " left out)");
             }
-            if (by != null && !fields(reads).contains(by)) {
-                throw new UsageException("--by: expected one of " + String.join(", ", fields(reads)) + ", found \""
-                        + by + "\"");
-            }
             BootstrapInterval bootstrap = BootstrapInterval.withDefaults().withDraws(draws);
             Scorecard all = Scorecard.of(set, placebo, bootstrap);
-            Map<String, Scorecard> groups = by == null || DECISION_FIELDS.contains(by) ? Map.of()
-                    : breakdown(reads, set, placebo, bootstrap, by, frequency);
-            return new Report(all, by, groups, lens(ws, reads, by, frequency));
+            LensReads lensReads = new LensReads(ws);
+            List<ScoredChange> decisions = lensReads.decisions();
+            DecisionLens lens = new DecisionLens(actuals);
+            List<Breakdown> breakdowns = new ArrayList<>();
+            for (String field : by) {
+                breakdowns.add(new Breakdown(field, DECISION_FIELDS.contains(field) ? Map.of()
+                        : breakdown(reads, set, placebo, bootstrap, field, frequency),
+                        lens.groups(decisions, keys(reads, field, frequency))));
+            }
+            return new Report(all, breakdowns, lens(ws.catalog().ledgerStep(), lens, lensReads, decisions,
+                    reads.unitValues()));
         }
     }
 
@@ -89,7 +108,8 @@ public final class Score {
             }
         }
         Map<String, Scorecard> out = new LinkedHashMap<>();
-        rowsByValue.forEach((value, rows) -> out.put(value, Scorecard.of(set, placebo, bootstrap,
+        // Intervals are drawn for the whole scorecard only (see Scorecard.of).
+        rowsByValue.forEach((value, rows) -> out.put(value, Scorecard.of(set, placebo, null,
                 rows.stream().mapToInt(Integer::intValue).toArray(), 0)));
         return out;
     }
@@ -101,16 +121,12 @@ public final class Score {
         return all;
     }
 
-    private static Lens lens(Workspace ws, ScoreReads reads, String by, Frequency frequency) {
-        LensReads lensReads = new LensReads(ws);
-        List<ScoredChange> decisions = lensReads.decisions();
-        List<ScoredChange> imported = lensReads.importedChanges();
-        DecisionLens lens = new DecisionLens(reads.actuals());
-        List<LensGroup> byField = by == null ? List.of() : lens.groups(decisions, keys(reads, by, frequency));
-        return new Lens(ws.catalog().ledgerStep(), lens.groups(decisions, c -> List.of(DecisionLens.sizeClass(c))),
+    private static Lens lens(String ledgerStep, DecisionLens lens, LensReads reads, List<ScoredChange> decisions,
+            Map<Integer, Long> unitValues) {
+        return new Lens(ledgerStep, lens.groups(decisions, c -> List.of(DecisionLens.sizeClass(c))),
                 lens.groups(decisions, c -> List.of(DecisionLens.direction(c))),
-                lens.groups(imported, c -> List.of(c.source() + " " + DecisionLens.sizeClass(c))), byField,
-                TimeAndMoney.of(decisions, lensReads.minutesByCycle().values(), reads.unitValues()));
+                lens.groups(reads.importedChanges(), c -> List.of(c.source() + " " + DecisionLens.sizeClass(c))),
+                TimeAndMoney.of(decisions, reads.minutesByCycle().values(), unitValues));
     }
 
     /** How a decision is keyed for a breakdown; a reason counts under each of its words. */

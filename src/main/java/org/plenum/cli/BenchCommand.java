@@ -16,6 +16,8 @@ import java.util.concurrent.Callable;
 import java.util.stream.Stream;
 import org.plenum.app.ImportBenchmark;
 import org.plenum.app.ImportBenchmark.Run;
+import org.plenum.app.ScoreBenchmark;
+import org.plenum.score.BootstrapInterval;
 import org.plenum.app.UsageException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -23,22 +25,26 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = "Benchmarks. bench import: generate a forecasts CSV, import it with every check on, compare"
-                + " with the sqlite3 shell's .import of the same file.")
+        description = {"Benchmarks, medians of several runs against a reference measured in the same run.",
+            "bench import: generate a forecasts CSV, import it with every check on, against the sqlite3 shell's"
+                + " .import of the same file.",
+            "bench score: generate a workspace of --rows scored pairs; full scorecard, three breakdowns and the"
+                + " bootstrap, against sqlite3 computing the plain per-step sums."})
 final class BenchCommand implements Callable<Integer> {
     @ParentCommand
     PlenumCommand root;
 
-    @Parameters(index = "0", paramLabel = "WHAT", description = "import")
+    @Parameters(index = "0", paramLabel = "WHAT", description = "import or score")
     String what;
 
-    @Option(names = "--rows", defaultValue = "1000000", description = "Rows in the forecasts file (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--rows", defaultValue = "1000000",
+            description = "Forecast rows (import) or scored pairs (score); default ${DEFAULT-VALUE}.")
     int rows;
 
     @Option(names = "--runs", defaultValue = "5", description = "Runs of each side; medians are reported (default: ${DEFAULT-VALUE}).")
     int runs;
 
-    @Option(names = "--heap", defaultValue = "256m", description = "-Xmx of the importing JVM (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--heap", description = "-Xmx of the measured JVM (default: 256m for import, 512m for score).")
     String heap;
 
     @Option(names = "--run-once", hidden = true, paramLabel = "DIR")
@@ -46,8 +52,19 @@ final class BenchCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException, InterruptedException {
-        if (!what.equals("import")) {
-            throw new UsageException("bench: expected import, found \"" + what + "\"");
+        if (!what.equals("import") && !what.equals("score")) {
+            throw new UsageException("bench: expected import or score, found \"" + what + "\"");
+        }
+        if (heap == null) {
+            heap = what.equals("import") ? "256m" : "512m";
+        }
+        if (runOnceDir != null && what.equals("score")) {
+            Run run = ScoreBenchmark.runOnce(root.workspaces, runOnceDir.resolve("score.db"));
+            root.spec.commandLine().getOut().println(run.line());
+            return ExitCodes.OK;
+        }
+        if (what.equals("score")) {
+            return benchScore();
         }
         if (runOnceDir != null) {
             Run run = ImportBenchmark.runOnce(root.workspaces, runOnceDir, runOnceDir.resolve("run.db"));
@@ -106,15 +123,64 @@ final class BenchCommand implements Callable<Integer> {
                 (double) median / ImportBenchmark.median(theirs));
     }
 
+    private int benchScore() throws IOException, InterruptedException {
+        PrintWriter out = root.spec.commandLine().getOut();
+        Path dir = Files.createTempDirectory("plenum-bench-score-");
+        try {
+            out.printf(Locale.ROOT, "generating a workspace of %,d scored pairs in %s%n", rows, dir);
+            ScoreBenchmark.generate(root.workspaces, dir, dir.resolve("score.db"), rows);
+            boolean reference = ImportBenchmark.sqlite3Installed();
+            long[] ours = new long[runs];
+            long[] theirs = new long[runs];
+            long peak = 0;
+            int pairs = 0;
+            for (int i = 0; i < runs; i++) {
+                Run r = child(List.of("bench", "score", "--run-once", dir.toString()));
+                ours[i] = r.nanos();
+                peak = Math.max(peak, r.peakHeapBytes());
+                pairs = (int) r.rows();
+                String line = String.format(Locale.ROOT, "  run %d: plenum %.3f s, peak heap %.0f MB", i + 1,
+                        r.nanos() / 1e9, r.peakHeapBytes() / 1048576.0);
+                if (reference) {
+                    theirs[i] = ImportBenchmark.sqlite3Query(dir.resolve("score.db"), ScoreBenchmark.SQLITE_SUMS);
+                    line += String.format(Locale.ROOT, "; sqlite3 sums %.3f s", theirs[i] / 1e9);
+                }
+                out.println(line);
+            }
+            long median = ImportBenchmark.median(ours);
+            out.printf(Locale.ROOT, "plenum score: %,d pairs, 4 sources, scorecard + %s breakdowns + %d-draw bootstrap"
+                    + " + lens: median %.3f s; peak heap %.0f MB (-Xmx%s)%n", pairs,
+                    String.join("/", ScoreBenchmark.BREAKDOWNS), BootstrapInterval.DEFAULT_DRAWS, median / 1e9,
+                    peak / 1048576.0, heap);
+            if (reference) {
+                long floor = ImportBenchmark.median(theirs);
+                out.printf(Locale.ROOT, "sqlite3 plain per-step sums: median %.3f s; ratio plenum/sqlite3 %.2f"
+                        + " (target <= 1.0)%n", floor / 1e9, (double) median / floor);
+            } else {
+                out.println("sqlite3 is not installed: no reference time (apt-get install sqlite3)");
+            }
+        } finally {
+            deleteTree(dir);
+        }
+        return ExitCodes.OK;
+    }
+
     /** Each run in a fresh JVM with the heap limit, as a user's import would run. */
     private Run childRun(Path dir) throws IOException, InterruptedException {
         Path runDir = Files.createTempDirectory(dir, "run-");
         Files.copy(dir.resolve("items.csv"), runDir.resolve("items.csv"));
         Files.createSymbolicLink(runDir.resolve("forecasts.csv"), dir.resolve("forecasts.csv"));
+        Run run = child(List.of("bench", "import", "--run-once", runDir.toString()));
+        deleteTree(runDir);
+        return run;
+    }
+
+    private Run child(List<String> args) throws IOException, InterruptedException {
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
         String classpath = System.getProperty("java.class.path");
         List<String> cmd = new ArrayList<>(List.of(java, "-Xmx" + heap, "-Djava.awt.headless=true", "-cp", classpath,
-                Main.class.getName(), "bench", "import", "--run-once", runDir.toString()));
+                Main.class.getName()));
+        cmd.addAll(args);
         Process p = new ProcessBuilder(cmd).redirectError(ProcessBuilder.Redirect.INHERIT).start();
         String line;
         try (BufferedReader r = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
@@ -123,7 +189,6 @@ final class BenchCommand implements Callable<Integer> {
         if (p.waitFor() != 0 || line == null) {
             throw new IllegalStateException("the benchmark run failed (exit " + p.exitValue() + ")");
         }
-        deleteTree(runDir);
         return Run.parse(line);
     }
 

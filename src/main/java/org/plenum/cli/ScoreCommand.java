@@ -32,9 +32,9 @@ final class ScoreCommand implements Callable<Integer> {
             description = "naive (last actual known) or seasonal (same period a season earlier); default ${DEFAULT-VALUE}.")
     PlaceboOption placebo;
 
-    @Option(names = "--by", paramLabel = "FIELD", description = "Break down by group, region, item, cycle or an item"
-            + " attribute.")
-    String by;
+    @Option(names = "--by", paramLabel = "FIELD", description = "Break down by group, region, item, cycle, an item"
+            + " attribute, or (decisions only) author, tag, reason, direction, size; may be repeated.")
+    java.util.List<String> by = new java.util.ArrayList<>();
 
     @Option(names = "--format", defaultValue = "table", description = "table, csv or json (default: ${DEFAULT-VALUE}).")
     Format format;

@@ -22,10 +22,12 @@ final class ScoreFormats {
                 all.lag(), all.placebo().stepName().replace('_', ' '), all.pairs(), all.leftOut());
         out.println("(left out: pairs with an actual but without every step's forecast)");
         table(all, out);
-        for (Map.Entry<String, Scorecard> g : report.groups().entrySet()) {
-            out.println();
-            out.printf(Locale.ROOT, "%s = %s: %,d pairs%n", report.by(), g.getKey(), g.getValue().pairs());
-            table(g.getValue(), out);
+        for (Score.Breakdown b : report.breakdowns()) {
+            for (Map.Entry<String, Scorecard> g : b.scorecards().entrySet()) {
+                out.println();
+                out.printf(Locale.ROOT, "%s = %s: %,d pairs%n", b.field(), g.getKey(), g.getValue().pairs());
+                table(g.getValue(), out);
+            }
         }
         lens(report, out);
     }
@@ -41,8 +43,9 @@ final class ScoreFormats {
             out.println("Imported steps' changes against the step before:");
             lensTable("class", lens.importedClasses(), out);
         }
-        if (!lens.by().isEmpty()) {
-            lensTable(report.by(), lens.by(), out);
+        for (Score.Breakdown b : report.breakdowns()) {
+            out.println("Decisions by " + b.field() + ":");
+            lensTable(b.field(), b.lens(), out);
         }
         time(lens.time(), out);
     }
@@ -92,7 +95,9 @@ final class ScoreFormats {
         out.println("group,step,n,mae,wape,accuracy,bias,mase,fva_vs_prev,fva_vs_placebo,avg_rel_mae_vs_prev,"
                 + "avg_rel_mae_low,avg_rel_mae_high,items_left_out,gmr_vs_prev,exact_hits,p_value,evidence");
         rows("", report.all(), out);
-        report.groups().forEach((value, card) -> rows(value, card, out));
+        for (Score.Breakdown b : report.breakdowns()) {
+            b.scorecards().forEach((value, card) -> rows(b.field() + "=" + value, card, out));
+        }
     }
 
     private static void rows(String group, Scorecard card, PrintWriter out) {
@@ -115,15 +120,17 @@ final class ScoreFormats {
     static void json(Score.Report report, PrintWriter out) {
         Json j = new Json().open();
         card(j, report.all());
-        if (report.by() != null) {
-            j.openObject("by").field("field", report.by()).openArray("groups");
-            report.groups().forEach((value, card) -> {
+        j.openObject("by");
+        for (Score.Breakdown b : report.breakdowns()) {
+            j.openArray(b.field());
+            b.scorecards().forEach((value, card) -> {
                 j.open().field("value", value);
                 card(j, card);
                 j.close();
             });
-            j.closeArray().close();
+            j.closeArray();
         }
+        j.close();
         lensJson(j, report);
         out.println(j.close());
     }
@@ -134,9 +141,11 @@ final class ScoreFormats {
         groupsJson(j, "classes", lens.classes());
         groupsJson(j, "directions", lens.directions());
         groupsJson(j, "imported_classes", lens.importedClasses());
-        if (report.by() != null) {
-            groupsJson(j, "by_" + report.by(), lens.by());
+        j.openObject("by");
+        for (Score.Breakdown b : report.breakdowns()) {
+            groupsJson(j, b.field(), b.lens());
         }
+        j.close();
         TimeAndMoney t = lens.time();
         j.openObject("time").field("decisions", t.decisions()).field("timed", t.timed())
                 .field("minutes", OptionalDouble.of(t.minutes())).field("minutes_per_decision", t.minutesPerDecision())

@@ -19,7 +19,11 @@ public record Scorecard(int lag, Placebo placebo, int pairs, int leftOut, List<S
         return of(set, placebo, bootstrap, allRows(set.size()), set.leftOut());
     }
 
-    /** The scorecard over the given rows of {@code set} (a breakdown's group), rows sorted by item. */
+    /**
+     * The scorecard over the given rows of {@code set} (a breakdown's group), rows sorted by item.
+     * Without a bootstrap, comparisons carry no interval: breakdowns leave it out, because a
+     * thousand draws per group and step cost more than all the rest of the scorecard.
+     */
     public static Scorecard of(PairedSet set, Placebo placebo, BootstrapInterval bootstrap, int[] rows, int leftOut) {
         long[] actuals = pick(set.actuals(), rows);
         long[][] errors = new long[set.sources().size()][];
@@ -45,6 +49,7 @@ public record Scorecard(int lag, Placebo placebo, int pairs, int leftOut, List<S
 
     private static Comparison compare(PairedSet set, int[] rows, long[] errors, long[] previousErrors,
             OptionalDouble accuracy, OptionalDouble previousAccuracy, String previous, BootstrapInterval bootstrap) {
+        // bootstrap may be null: see of(PairedSet, Placebo, BootstrapInterval, int[], int)
         AvgRelMae.Result avgRelMae = AvgRelMae.of(perItem(set.items(), rows, errors, previousErrors));
         long[] differences = new long[errors.length];
         for (int i = 0; i < errors.length; i++) {
@@ -52,7 +57,8 @@ public record Scorecard(int lag, Placebo placebo, int pairs, int leftOut, List<S
         }
         WilcoxonSignedRank.Result wilcoxon = WilcoxonSignedRank.twoSided().test(differences);
         return new Comparison(previous, difference(accuracy, previousAccuracy), avgRelMae,
-                bootstrap.of(avgRelMae.logRatios()), GeometricMeanRatio.of(errors, previousErrors), wilcoxon,
+                bootstrap == null ? Optional.empty() : bootstrap.of(avgRelMae.logRatios()),
+                GeometricMeanRatio.of(errors, previousErrors), wilcoxon,
                 Evidence.of(wilcoxon, avgRelMae.value()));
     }
 

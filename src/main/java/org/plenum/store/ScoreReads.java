@@ -35,10 +35,33 @@ public final class ScoreReads {
         }
         // The ledger step is never first and is the only step not imported, so its predecessor is imported.
         Step previous = catalog.previous(step).orElseThrow();
-        return series("SELECT f.item_id, f.period, coalesce((SELECT d.quantity FROM decisions d"
-                + " WHERE d.item_id = f.item_id AND d.cycle = f.cycle AND d.period = f.period AND d.step_id = "
-                + step.id() + " ORDER BY d.id DESC LIMIT 1), f.quantity) FROM forecasts f WHERE f.step_id = "
-                + previous.id() + " AND f.period - f.cycle = " + lag + " ORDER BY f.item_id, f.period");
+        Series decided = series("SELECT d.item_id, d.period, d.quantity FROM decisions d WHERE d.step_id = "
+                + step.id() + " AND d.period - d.cycle = " + lag
+                + " AND NOT EXISTS (SELECT 1 FROM decisions n WHERE n.supersedes = d.id) ORDER BY d.item_id, d.period");
+        return overlay(stepAtLag(previous.name(), lag), decided);
+    }
+
+    /**
+     * The previous step's values with the standing decisions put over them: one merge of two
+     * sorted columns, instead of a correlated lookup for each of a million rows.
+     */
+    static Series overlay(Series base, Series decided) {
+        long[] quantities = base.quantities().clone();
+        int d = 0;
+        for (int i = 0; i < base.size() && d < decided.size(); i++) {
+            while (d < decided.size() && compare(decided, d, base, i) < 0) {
+                d++;
+            }
+            if (d < decided.size() && compare(decided, d, base, i) == 0) {
+                quantities[i] = decided.quantities()[d++];
+            }
+        }
+        return new Series(base.items(), base.periods(), quantities, base.size());
+    }
+
+    private static int compare(Series a, int i, Series b, int j) {
+        int byItem = Integer.compare(a.items()[i], b.items()[j]);
+        return byItem != 0 ? byItem : Integer.compare(a.periods()[i], b.periods()[j]);
     }
 
     /** Item codes by id. */
