@@ -49,8 +49,17 @@ public final class Score {
     public record Lens(String ledgerStep, List<LensGroup> classes, List<LensGroup> directions,
             List<LensGroup> importedClasses, TimeAndMoney time) {}
 
-    /** @param by breakdown fields, none when null or empty */
+    /** @param fields breakdown fields, none when null or empty */
     public static Report run(Workspaces workspaces, Path db, int lag, Placebo placebo, List<String> fields, int draws) {
+        return run(workspaces, db, lag, placebo, fields, draws, true);
+    }
+
+    /**
+     * @param withLens false leaves the decision lens out (its fields are then empty), for callers
+     *     that need the scorecards only
+     */
+    public static Report run(Workspaces workspaces, Path db, int lag, Placebo placebo, List<String> fields, int draws,
+            boolean withLens) {
         List<String> by = fields == null ? List.of() : fields;
         try (Workspace ws = workspaces.open(db)) {
             Catalog catalog = ws.catalog();
@@ -65,11 +74,9 @@ public final class Score {
                             + field + "\"");
                 }
             }
-            Series actuals = reads.actuals();
-            List<Series> steps = new ArrayList<>();
-            for (String step : catalog.stepNames()) {
-                steps.add(reads.stepAtLag(step, lag));
-            }
+            List<Series> read = ParallelReads.of(workspaces, db, catalog.stepNames(), lag);
+            Series actuals = read.get(0);
+            List<Series> steps = read.subList(1, read.size());
             PairedSet set = PairedSet.of(actuals, catalog.stepNames(), steps, lag, placebo,
                     frequency.seasonLength());
             if (set.size() == 0) {
@@ -79,7 +86,7 @@ public final class Score {
             BootstrapInterval bootstrap = BootstrapInterval.withDefaults().withDraws(draws);
             Scorecard all = Scorecard.of(set, placebo, bootstrap);
             LensReads lensReads = new LensReads(ws);
-            List<ScoredChange> decisions = lensReads.decisions();
+            List<ScoredChange> decisions = withLens ? lensReads.decisions() : List.of();
             DecisionLens lens = new DecisionLens(actuals);
             List<Breakdown> breakdowns = new ArrayList<>();
             for (String field : by) {
@@ -87,30 +94,29 @@ public final class Score {
                         : breakdown(reads, set, placebo, bootstrap, field, frequency),
                         lens.groups(decisions, keys(reads, field, frequency))));
             }
-            return new Report(all, breakdowns, lens(ws.catalog().ledgerStep(), lens, lensReads, decisions,
-                    reads.unitValues()));
+            return new Report(all, breakdowns, withLens ? lens(ws.catalog().ledgerStep(), lens, lensReads, decisions,
+                    reads.unitValues()) : null);
         }
     }
 
     private static Map<String, Scorecard> breakdown(ScoreReads reads, PairedSet set, Placebo placebo,
             BootstrapInterval bootstrap, String by, Frequency frequency) {
+        Map<Integer, String> values = by.equals("cycle") ? Map.of() : reads.attribute(by);
+        java.util.function.BiFunction<Integer, Integer, String> key = by.equals("cycle")
+                ? (item, period) -> new Period(frequency, period - set.lag()).toString()
+                : (item, period) -> values.getOrDefault(item, "(none)");
         Map<String, List<Integer>> rowsByValue = new TreeMap<>();
-        if (by.equals("cycle")) {
-            for (int i = 0; i < set.size(); i++) {
-                String cycle = new Period(frequency, set.periods()[i] - set.lag()).toString();
-                rowsByValue.computeIfAbsent(cycle, k -> new ArrayList<>()).add(i);
-            }
-        } else {
-            Map<Integer, String> values = reads.attribute(by);
-            for (int i = 0; i < set.size(); i++) {
-                String value = values.getOrDefault(set.items()[i], "(none)");
-                rowsByValue.computeIfAbsent(value, k -> new ArrayList<>()).add(i);
-            }
+        for (int i = 0; i < set.size(); i++) {
+            rowsByValue.computeIfAbsent(key.apply(set.items()[i], set.periods()[i]), k -> new ArrayList<>()).add(i);
+        }
+        Map<String, Integer> leftOut = new java.util.HashMap<>();
+        for (int i = 0; i < set.leftOut(); i++) {
+            leftOut.merge(key.apply(set.leftOutItems()[i], set.leftOutPeriods()[i]), 1, Integer::sum);
         }
         Map<String, Scorecard> out = new LinkedHashMap<>();
         // Intervals are drawn for the whole scorecard only (see Scorecard.of).
         rowsByValue.forEach((value, rows) -> out.put(value, Scorecard.of(set, placebo, null,
-                rows.stream().mapToInt(Integer::intValue).toArray(), 0)));
+                rows.stream().mapToInt(Integer::intValue).toArray(), leftOut.getOrDefault(value, 0))));
         return out;
     }
 

@@ -109,7 +109,8 @@ public final class ScoreBenchmark {
         System.gc();
         ManagementFactory.getMemoryPoolMXBeans().forEach(MemoryPoolMXBean::resetPeakUsage);
         long t0 = System.nanoTime();
-        Score.Report report = Score.run(workspaces, db, 1, Placebo.NAIVE, BREAKDOWNS, BootstrapInterval.DEFAULT_DRAWS);
+        Score.Report report = Score.run(workspaces, db, 1, Placebo.NAIVE, BREAKDOWNS, BootstrapInterval.DEFAULT_DRAWS,
+                false);
         long nanos = System.nanoTime() - t0;
         return new ImportBenchmark.Run(report.all().pairs(), nanos, ImportBenchmark.peakHeap());
     }

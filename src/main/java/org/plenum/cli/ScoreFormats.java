@@ -54,24 +54,32 @@ final class ScoreFormats {
         if (groups.isEmpty()) {
             return;
         }
-        out.printf("%-20s %6s %6s %6s %6s %6s %6s %7s  %s%n", clip(heading, 20), "n", "right", "over", "optim",
-                "better", "GMR", "p", "evidence");
+        out.printf("%-16s %5s %5s %5s %5s %5s %5s %6s  %s%n", clip(heading, 16), "n", "right", "over", "optim",
+                "impr", "GMR", "p", "evidence");
         for (LensGroup g : groups) {
-            out.printf(Locale.ROOT, "%-20s %6d %6s %6s %6s %6s %6s %7s  %s%n", clip(g.key(), 20), g.count(),
-                    pct(g.shareRight()), pct(g.shareOvershoot()), pct(g.shareOptimistic()), pct(g.shareImproved()),
-                    num(g.ratio().value(), 3), pValue(g.wilcoxon().pValue()), g.evidence().label().text());
+            out.printf(Locale.ROOT, "%-16s %5d %5s %5s %5s %5s %5s %6s  %s%n", clip(g.key(), 16), g.count(),
+                    share(g.shareRight()), share(g.shareOvershoot()), share(g.shareOptimistic()),
+                    share(g.shareImproved()), num(g.ratio().value(), 2), pValue(g.wilcoxon().pValue()),
+                    g.evidence().label().text());
         }
     }
 
     private static void time(TimeAndMoney t, PrintWriter out) {
-        out.printf(Locale.ROOT, "Time: %,d of %,d decisions timed, %.0f minutes; %s min per decision, %s per item,"
-                + " %s per meeting%n", t.timed(), t.decisions(), t.minutes(), num(t.minutesPerDecision(), 1),
-                num(t.minutesPerItem(), 1), num(t.minutesPerMeeting(), 0));
-        out.printf(Locale.ROOT, "Absolute error avoided: %,.0f units in all, %s units per meeting hour%s%n",
-                t.errorAvoided(), num(t.errorAvoidedPerHour(), 1), t.moneyPerHour().isPresent()
-                        ? String.format(Locale.ROOT, ", %,.0f in money per meeting hour", t.moneyPerHour().getAsDouble())
-                        : "");
+        out.printf(Locale.ROOT, "Time: %,d of %,d scored decisions timed, %,.0f minutes in all;%n", t.timed(),
+                t.decisions(), t.minutes());
+        out.printf(Locale.ROOT, "  minutes per decision %s, per item %s, per meeting %s%n",
+                num(t.minutesPerDecision(), 1), num(t.minutesPerItem(), 1), num(t.minutesPerMeeting(), 0));
+        out.printf(Locale.ROOT, "Absolute error avoided: %,.0f units; %s units per meeting hour%n", t.errorAvoided(),
+                num(t.errorAvoidedPerHour(), 1));
+        if (t.moneyPerHour().isPresent()) {
+            out.printf(Locale.ROOT, "  in money: %,.0f; %,.0f per meeting hour%n", t.moneyAvoided().getAsDouble(),
+                    t.moneyPerHour().getAsDouble());
+        }
         out.println("(negative = the decisions made the forecast worse)");
+    }
+
+    private static String share(OptionalDouble v) {
+        return v.isPresent() ? String.format(Locale.ROOT, "%.0f%%", 100 * v.getAsDouble()) : "-";
     }
 
     private static void table(Scorecard card, PrintWriter out) {
@@ -82,12 +90,12 @@ final class ScoreFormats {
                             ? OptionalDouble.of(Math.max(0, s.accuracy().getAsDouble())) : s.accuracy()),
                     bias(s.bias()), num(s.mase(), 3));
         }
-        out.printf("%-14s %9s %9s %-21s %6s %8s  %s%n", "step vs prev", "FVA", "AvgRelMAE", "  95% interval", "GMR",
-                "p", "evidence");
+        out.printf("%-10s %9s %9s %-15s %5s %6s  %s%n", "vs prev", "FVA", "AvgRelMAE", " 95% interval", "GMR", "p",
+                "evidence");
         for (StepScore s : card.steps()) {
-            s.vsPrevious().ifPresent(c -> out.printf(Locale.ROOT, "%-14s %9s %9s %-21s %6s %8s  %s%n",
-                    clip(s.step(), 14), points(c.fva()), num(c.avgRelMae().value(), 3), interval(c),
-                    num(c.ratio().value(), 3), pValue(c.wilcoxon().pValue()), c.evidence().label().text()));
+            s.vsPrevious().ifPresent(c -> out.printf(Locale.ROOT, "%-10s %9s %9s %-15s %5s %6s  %s%n",
+                    clip(s.step(), 10), points(c.fva()), num(c.avgRelMae().value(), 3), interval(c),
+                    num(c.ratio().value(), 2), pValue(c.wilcoxon().pValue()), c.evidence().label().text()));
         }
     }
 
@@ -215,7 +223,7 @@ final class ScoreFormats {
     }
 
     private static String interval(Comparison c) {
-        return c.interval().map(i -> String.format(Locale.ROOT, "  [%.3f, %.3f]", i.lower(), i.upper())).orElse("  -");
+        return c.interval().map(i -> String.format(Locale.ROOT, "[%.3f,%.3f]", i.lower(), i.upper())).orElse("-");
     }
 
     private static String pValue(OptionalDouble p) {

@@ -23,12 +23,21 @@ public final class DecisionLens {
         this.history = new ActualHistory(actuals, 1);
     }
 
-    /** The class of a change: its direction and size, e.g. "up 15-35%"; "kept" for a review without change. */
+    /**
+     * The class of a change: its direction and size, e.g. "up 15-35%", "up over 100%", "set to
+     * zero", "up from zero"; "kept" for a review without change.
+     */
     public static String sizeClass(ScoredChange c) {
         if (c.kept() || c.quantity() == c.prior()) {
             return "kept";
         }
-        return direction(c) + " " + SizeClass.of(c.prior(), c.quantity()).label();
+        SizeClass size = SizeClass.of(c.prior(), c.quantity());
+        return switch (size) {
+            case OVER_100_UP -> "up over 100%";
+            case SET_TO_ZERO -> "set to zero";
+            case FROM_ZERO -> "up from zero";
+            default -> direction(c) + " " + size.label();
+        };
     }
 
     public static String direction(ScoredChange c) {

@@ -12,9 +12,16 @@ import org.plenum.core.Series;
  *
  * @param forecasts {@code forecasts[s][i]}: source s (0 = placebo) for pair i, in millionths
  * @param scales the MASE scale of each pair's item at its cycle, NaN where undefined
+ * @param leftOutItems item of each left-out pair, so that a breakdown can count its own
+ * @param leftOutPeriods target period of each left-out pair
  */
 public record PairedSet(List<String> sources, int lag, int[] items, int[] periods, long[] actuals,
-        long[][] forecasts, double[] scales, int size, int leftOut) {
+        long[][] forecasts, double[] scales, int size, int[] leftOutItems, int[] leftOutPeriods) {
+
+    /** Pairs with an actual and some but not all forecasts. */
+    public int leftOut() {
+        return leftOutItems.length;
+    }
 
     /** The pairs of {@code steps} (sorted series at {@code lag}) that the placebo and actuals complete. */
     public static PairedSet of(Series actuals, List<String> stepNames, List<Series> steps, int lag, Placebo placebo,
@@ -59,7 +66,7 @@ public record PairedSet(List<String> sources, int lag, int[] items, int[] period
         private long[][] forecasts;
         private double[] scales = new double[1024];
         private int size;
-        private int leftOut;
+        private final Series.Builder leftOut = new Series.Builder();
         private final long[] row;
 
         Builder(int sources) {
@@ -88,7 +95,7 @@ public record PairedSet(List<String> sources, int lag, int[] items, int[] period
             row[0] = source < 0 ? -1 : history.quantity(source);
             present += source < 0 ? 0 : 1;
             if (present < row.length) {
-                leftOut++;
+                leftOut.add(item, period, 0);
                 return;
             }
             add(item, period, history.quantity(actual), history.scale(item, cycle));
@@ -116,7 +123,9 @@ public record PairedSet(List<String> sources, int lag, int[] items, int[] period
         }
 
         PairedSet build(List<String> sources, int lag) {
-            return new PairedSet(sources, lag, items, periods, actuals, forecasts, scales, size, leftOut);
+            Series out = leftOut.build();
+            return new PairedSet(sources, lag, items, periods, actuals, forecasts, scales, size,
+                    Arrays.copyOf(out.items(), out.size()), Arrays.copyOf(out.periods(), out.size()));
         }
     }
 }
