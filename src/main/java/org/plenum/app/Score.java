@@ -99,24 +99,25 @@ public final class Score {
         }
     }
 
+    /**
+     * One scorecard per value of {@code by}. Rows are grouped through integer labels (a label per
+     * item, or per cycle), and the groups are scored in parallel: each is independent and pure.
+     */
     private static Map<String, Scorecard> breakdown(ScoreReads reads, PairedSet set, Placebo placebo,
             BootstrapInterval bootstrap, String by, Frequency frequency) {
-        Map<Integer, String> values = by.equals("cycle") ? Map.of() : reads.attribute(by);
-        java.util.function.BiFunction<Integer, Integer, String> key = by.equals("cycle")
-                ? (item, period) -> new Period(frequency, period - set.lag()).toString()
-                : (item, period) -> values.getOrDefault(item, "(none)");
-        Map<String, List<Integer>> rowsByValue = new TreeMap<>();
-        for (int i = 0; i < set.size(); i++) {
-            rowsByValue.computeIfAbsent(key.apply(set.items()[i], set.periods()[i]), k -> new ArrayList<>()).add(i);
-        }
-        Map<String, Integer> leftOut = new java.util.HashMap<>();
-        for (int i = 0; i < set.leftOut(); i++) {
-            leftOut.merge(key.apply(set.leftOutItems()[i], set.leftOutPeriods()[i]), 1, Integer::sum);
-        }
-        Map<String, Scorecard> out = new LinkedHashMap<>();
+        Labels labels = by.equals("cycle") ? Labels.ofCycles(set, frequency) : Labels.ofItems(set, reads.attribute(by));
+        int[][] rows = labels.rows(set.items(), set.periods(), set.size());
+        int[] leftOut = labels.counts(set.leftOutItems(), set.leftOutPeriods());
+        Scorecard[] cards = new Scorecard[rows.length];
         // Intervals are drawn for the whole scorecard only (see Scorecard.of).
-        rowsByValue.forEach((value, rows) -> out.put(value, Scorecard.of(set, placebo, null,
-                rows.stream().mapToInt(Integer::intValue).toArray(), leftOut.getOrDefault(value, 0))));
+        java.util.stream.IntStream.range(0, rows.length).parallel().filter(g -> rows[g].length > 0)
+                .forEach(g -> cards[g] = Scorecard.of(set, placebo, null, rows[g], leftOut[g]));
+        Map<String, Scorecard> out = new TreeMap<>();
+        for (int g = 0; g < rows.length; g++) {
+            if (cards[g] != null) {
+                out.put(labels.names().get(g), cards[g]);
+            }
+        }
         return out;
     }
 

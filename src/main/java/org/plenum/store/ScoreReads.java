@@ -19,7 +19,7 @@ public final class ScoreReads {
 
     /** Every actual, by item and period. */
     public Series actuals() {
-        return series("SELECT item_id, period, quantity FROM actuals ORDER BY item_id, period");
+        return packed("actuals", "1 = 1");
     }
 
     /**
@@ -30,8 +30,7 @@ public final class ScoreReads {
         Catalog catalog = workspace.catalog();
         Step step = catalog.step(stepName).orElseThrow(() -> new IllegalArgumentException("unknown step " + stepName));
         if (!step.name().equals(catalog.ledgerStep())) {
-            return series("SELECT item_id, period, quantity FROM forecasts WHERE step_id = " + step.id()
-                    + " AND period - cycle = " + lag + " ORDER BY item_id, period");
+            return packed("forecasts", "step_id = " + step.id() + " AND period - cycle = " + lag);
         }
         // The ledger step is never first and is the only step not imported, so its predecessor is imported.
         Step previous = catalog.previous(step).orElseThrow();
@@ -131,6 +130,25 @@ public final class ScoreReads {
             }
         }
         return values;
+    }
+
+    /**
+     * Reads (period, quantity) of {@code table}'s rows matching {@code where}, one text row per
+     * item built by SQLite's group_concat. A million values then cost forty thousand trips
+     * through the driver instead of a million, which is most of the time a plain read takes.
+     */
+    private Series packed(String table, String where) {
+        String sql = "SELECT item_id, group_concat(period || ',' || quantity, ';') FROM " + table + " WHERE " + where
+                + " GROUP BY item_id ORDER BY item_id";
+        return workspace.read(c -> {
+            Series.Builder b = new Series.Builder();
+            try (PreparedStatement ps = c.prepareStatement(sql); ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    PackedRows.parse(rs.getInt(1), rs.getString(2), b);
+                }
+            }
+            return b.build();
+        });
     }
 
     private Series series(String sql) {
