@@ -107,7 +107,7 @@ public final class ImportBenchmark {
         String script = "PRAGMA journal_mode=WAL;\nPRAGMA synchronous=NORMAL;\n"
                 + "CREATE TABLE forecasts(item TEXT NOT NULL, period TEXT NOT NULL, cycle TEXT NOT NULL,"
                 + " step TEXT NOT NULL, quantity NUMERIC NOT NULL CHECK (quantity >= 0),"
-                + " PRIMARY KEY (item, step, cycle, period)) WITHOUT ROWID;\n"
+                + " PRIMARY KEY (step, item, cycle, period)) WITHOUT ROWID;\n"
                 + ".import --csv --skip 1 " + dir.resolve("forecasts.csv") + " forecasts\n";
         return sqlite3(db, script);
     }

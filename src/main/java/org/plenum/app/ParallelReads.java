@@ -19,12 +19,15 @@ import org.plenum.store.Workspace;
 final class ParallelReads {
     private ParallelReads() {}
 
-    /** The actuals first, then each step's series in order. */
-    static List<Series> of(Workspaces workspaces, Path db, List<String> steps, int lag) {
+    /**
+     * The actuals first, then each step's series in order. The ledger step is its predecessor's
+     * series with the standing decisions laid over it, so that series is read once, not twice.
+     */
+    static List<Series> of(Workspaces workspaces, Path db, List<String> steps, String ledgerStep, int lag) {
         List<Function<ScoreReads, Series>> reads = new ArrayList<>();
         reads.add(ScoreReads::actuals);
         for (String step : steps) {
-            reads.add(r -> r.stepAtLag(step, lag));
+            reads.add(step.equals(ledgerStep) ? r -> r.decidedAtLag(lag) : r -> r.stepAtLag(step, lag));
         }
         ExecutorService pool = Executors.newFixedThreadPool(2, r -> {
             Thread t = new Thread(r, "plenum-score-read");
@@ -43,6 +46,10 @@ final class ParallelReads {
             List<Series> out = new ArrayList<>();
             for (Future<Series> f : futures) {
                 out.add(f.get());
+            }
+            int ledger = steps.indexOf(ledgerStep) + 1;
+            if (ledger > 1) {
+                out.set(ledger, ScoreReads.overlay(out.get(ledger - 1), out.get(ledger)));
             }
             return out;
         } catch (ExecutionException e) {

@@ -74,7 +74,7 @@ public final class Score {
                             + field + "\"");
                 }
             }
-            List<Series> read = ParallelReads.of(workspaces, db, catalog.stepNames(), lag);
+            List<Series> read = ParallelReads.of(workspaces, db, catalog.stepNames(), catalog.ledgerStep(), lag);
             Series actuals = read.get(0);
             List<Series> steps = read.subList(1, read.size());
             PairedSet set = PairedSet.of(actuals, catalog.stepNames(), steps, lag, placebo,

@@ -96,7 +96,7 @@ public final class ImportSession implements AutoCloseable {
         return run(conn -> {
             if (forecasts == null) {
                 forecasts = prepare("INSERT INTO forecasts(item_id, step_id, cycle, period, quantity) VALUES (?,?,?,?,?)"
-                        + onConflict("item_id, step_id, cycle, period", "quantity = excluded.quantity"));
+                        + onConflict("step_id, item_id, cycle, period", "quantity = excluded.quantity"));
             }
             for (ForecastRow r : rows) {
                 forecasts.setInt(1, r.itemId());

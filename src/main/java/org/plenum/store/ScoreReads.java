@@ -34,17 +34,23 @@ public final class ScoreReads {
         }
         // The ledger step is never first and is the only step not imported, so its predecessor is imported.
         Step previous = catalog.previous(step).orElseThrow();
-        Series decided = series("SELECT d.item_id, d.period, d.quantity FROM decisions d WHERE d.step_id = "
-                + step.id() + " AND d.period - d.cycle = " + lag
+        return overlay(stepAtLag(previous.name(), lag), decidedAtLag(lag));
+    }
+
+    /** The ledger's standing decisions at one lag, keyed by target period. */
+    public Series decidedAtLag(int lag) {
+        Catalog catalog = workspace.catalog();
+        Step step = catalog.step(catalog.ledgerStep()).orElseThrow();
+        return series("SELECT d.item_id, d.period, d.quantity FROM decisions d WHERE d.step_id = " + step.id()
+                + " AND d.period - d.cycle = " + lag
                 + " AND NOT EXISTS (SELECT 1 FROM decisions n WHERE n.supersedes = d.id) ORDER BY d.item_id, d.period");
-        return overlay(stepAtLag(previous.name(), lag), decided);
     }
 
     /**
      * The previous step's values with the standing decisions put over them: one merge of two
      * sorted columns, instead of a correlated lookup for each of a million rows.
      */
-    static Series overlay(Series base, Series decided) {
+    public static Series overlay(Series base, Series decided) {
         long[] quantities = base.quantities().clone();
         int d = 0;
         for (int i = 0; i < base.size() && d < decided.size(); i++) {

@@ -35,7 +35,8 @@ CREATE TABLE forecasts(
   cycle    INTEGER NOT NULL,
   period   INTEGER NOT NULL CHECK (period >= cycle),
   quantity INTEGER NOT NULL CHECK (quantity >= 0),
-  PRIMARY KEY (item_id, step_id, cycle, period)
+  -- step first: scoring reads one step at a time, in item order
+  PRIMARY KEY (step_id, item_id, cycle, period)
 ) WITHOUT ROWID;
 CREATE TABLE tags(
   name    TEXT PRIMARY KEY,
