@@ -15,6 +15,7 @@ import org.plenum.core.Period;
 import org.plenum.io.CsvImporter;
 import org.plenum.io.ImportKind;
 import org.plenum.io.Progress;
+import org.plenum.store.Sqlite3Shell;
 import org.plenum.store.Workspace;
 
 /**
@@ -99,56 +100,13 @@ public final class ImportBenchmark {
         }
     }
 
-    /**
-     * Times the sqlite3 shell loading the same file into a table of the same columns and primary
-     * key, in WAL mode with synchronous=NORMAL like ours; returns nanoseconds.
-     */
+    /** Times the sqlite3 shell loading the same file into a table keyed like ours; returns nanoseconds. */
     public static long sqlite3Import(Path dir, Path db) {
-        String script = "PRAGMA journal_mode=WAL;\nPRAGMA synchronous=NORMAL;\n"
-                + "CREATE TABLE forecasts(item TEXT NOT NULL, period TEXT NOT NULL, cycle TEXT NOT NULL,"
-                + " step TEXT NOT NULL, quantity NUMERIC NOT NULL CHECK (quantity >= 0),"
-                + " PRIMARY KEY (step, item, cycle, period)) WITHOUT ROWID;\n"
-                + ".import --csv --skip 1 " + dir.resolve("forecasts.csv") + " forecasts\n";
-        return sqlite3(db, script);
-    }
-
-    private static long sqlite3(Path db, String script) {
-        try {
-            ProcessBuilder pb = new ProcessBuilder("sqlite3", "-batch", db.toString()).redirectErrorStream(true)
-                    .redirectOutput(ProcessBuilder.Redirect.DISCARD);
-            long t0 = System.nanoTime();
-            Process p = pb.start();
-            p.getOutputStream().write(script.getBytes(StandardCharsets.UTF_8));
-            p.getOutputStream().close();
-            int code = p.waitFor();
-            long nanos = System.nanoTime() - t0;
-            if (code != 0) {
-                throw new IllegalStateException("sqlite3 exited with " + code);
-            }
-            return nanos;
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException(e);
-        }
-    }
-
-    /** Times the sqlite3 shell running {@code sql} on {@code db}, output discarded; returns nanoseconds. */
-    public static long sqlite3Query(Path db, String sql) {
-        return sqlite3(db, sql);
+        return Sqlite3Shell.importForecasts(dir.resolve("forecasts.csv"), db);
     }
 
     public static boolean sqlite3Installed() {
-        try {
-            return new ProcessBuilder("sqlite3", "-version").redirectErrorStream(true)
-                    .redirectOutput(ProcessBuilder.Redirect.DISCARD).start().waitFor() == 0;
-        } catch (IOException e) {
-            return false;
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            return false;
-        }
+        return Sqlite3Shell.installed();
     }
 
     public static long median(long[] values) {

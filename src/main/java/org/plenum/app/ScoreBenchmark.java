@@ -114,9 +114,4 @@ public final class ScoreBenchmark {
         long nanos = System.nanoTime() - t0;
         return new ImportBenchmark.Run(report.all().pairs(), nanos, ImportBenchmark.peakHeap());
     }
-
-    /** The SQL the sqlite3 shell runs as the floor: plain per-step sums over the same pairs. */
-    public static final String SQLITE_SUMS = "SELECT f.step_id, count(*), sum(abs(a.quantity - f.quantity)),"
-            + " sum(f.quantity - a.quantity), sum(a.quantity) FROM forecasts f JOIN actuals a"
-            + " ON a.item_id = f.item_id AND a.period = f.period WHERE f.period - f.cycle = 1 GROUP BY f.step_id;";
 }

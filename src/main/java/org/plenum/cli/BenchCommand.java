@@ -18,6 +18,7 @@ import org.plenum.app.ImportBenchmark;
 import org.plenum.app.ImportBenchmark.Run;
 import org.plenum.app.ScoreBenchmark;
 import org.plenum.score.BootstrapInterval;
+import org.plenum.store.Sqlite3Shell;
 import org.plenum.app.UsageException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -142,14 +143,14 @@ final class BenchCommand implements Callable<Integer> {
                 String line = String.format(Locale.ROOT, "  run %d: plenum %.3f s, peak heap %.0f MB", i + 1,
                         r.nanos() / 1e9, r.peakHeapBytes() / 1048576.0);
                 if (reference) {
-                    theirs[i] = ImportBenchmark.sqlite3Query(dir.resolve("score.db"), ScoreBenchmark.SQLITE_SUMS);
+                    theirs[i] = Sqlite3Shell.perStepSums(dir.resolve("score.db"), 1);
                     line += String.format(Locale.ROOT, "; sqlite3 sums %.3f s", theirs[i] / 1e9);
                 }
                 out.println(line);
             }
             long median = ImportBenchmark.median(ours);
             out.printf(Locale.ROOT, "plenum score: %,d pairs, 4 sources, scorecard + %s breakdowns + %d-draw bootstrap"
-                    + " + lens: median %.3f s; peak heap %.0f MB (-Xmx%s)%n", pairs,
+                    + ": median %.3f s; peak heap %.0f MB (sum of pool peaks; -Xmx%s)%n", pairs,
                     String.join("/", ScoreBenchmark.BREAKDOWNS), BootstrapInterval.DEFAULT_DRAWS, median / 1e9,
                     peak / 1048576.0, heap);
             if (reference) {
