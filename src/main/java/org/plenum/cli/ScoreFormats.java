@@ -69,6 +69,11 @@ final class ScoreFormats {
                 t.decisions(), t.minutes());
         out.printf(Locale.ROOT, "  minutes per decision %s, per item %s, per meeting %s%n",
                 num(t.minutesPerDecision(), 1), num(t.minutesPerItem(), 1), num(t.minutesPerMeeting(), 0));
+        if (!t.minutesByAuthor().isEmpty()) {
+            StringBuilder authors = new StringBuilder("  minutes by author:");
+            t.minutesByAuthor().forEach((a, m) -> authors.append(String.format(Locale.ROOT, " %s %.0f", a, m)));
+            out.println(authors);
+        }
         out.printf(Locale.ROOT, "Absolute error avoided: %,.0f units; %s units per meeting hour%n", t.errorAvoided(),
                 num(t.errorAvoidedPerHour(), 1));
         if (t.moneyPerHour().isPresent()) {
@@ -160,7 +165,9 @@ final class ScoreFormats {
                 .field("minutes_per_item", t.minutesPerItem()).field("minutes_per_meeting", t.minutesPerMeeting())
                 .field("error_avoided", OptionalDouble.of(t.errorAvoided()))
                 .field("error_avoided_per_hour", t.errorAvoidedPerHour()).field("money_avoided", t.moneyAvoided())
-                .field("money_avoided_per_hour", t.moneyPerHour()).close();
+                .field("money_avoided_per_hour", t.moneyPerHour()).openObject("minutes_by_author");
+        t.minutesByAuthor().forEach((a, m) -> j.field(a, OptionalDouble.of(m)));
+        j.close().close();
         j.close();
     }
 
