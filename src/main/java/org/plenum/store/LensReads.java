@@ -16,21 +16,19 @@ public final class LensReads {
         this.workspace = workspace;
     }
 
-    /** Standing ledger decisions whose target period has an actual, oldest first. */
+    /** Standing ledger decisions (of any step) whose target period has an actual, oldest first. */
     public List<ScoredChange> decisions() {
-        Catalog catalog = workspace.catalog();
-        String source = catalog.ledgerStep();
         return workspace.read(c -> {
             List<ScoredChange> out = new ArrayList<>();
             try (PreparedStatement ps = c.prepareStatement("SELECT d.item_id, d.cycle, d.period, d.prior, d.quantity,"
-                    + " d.kept, d.author, d.tag, d.reason, d.minutes, a.quantity FROM decisions d JOIN actuals a"
-                    + " ON a.item_id = d.item_id AND a.period = d.period"
+                    + " d.kept, d.author, d.tag, d.reason, d.minutes, a.quantity, s.name FROM decisions d"
+                    + " JOIN steps s ON s.id = d.step_id JOIN actuals a ON a.item_id = d.item_id AND a.period = d.period"
                     + " WHERE NOT EXISTS (SELECT 1 FROM decisions n WHERE n.supersedes = d.id) ORDER BY d.id");
                     ResultSet rs = ps.executeQuery()) {
                 while (rs.next()) {
                     long minutes = rs.getLong(10);
                     Long minutesOrNull = rs.wasNull() ? null : minutes;
-                    out.add(new ScoredChange(source, rs.getInt(1), rs.getInt(2), rs.getInt(3), rs.getLong(4),
+                    out.add(new ScoredChange(rs.getString(12), rs.getInt(1), rs.getInt(2), rs.getInt(3), rs.getLong(4),
                             rs.getLong(5), rs.getLong(11), rs.getInt(6) == 1, rs.getString(7), rs.getString(8),
                             rs.getString(9), minutesOrNull));
                 }
