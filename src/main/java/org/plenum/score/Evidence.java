@@ -7,7 +7,7 @@ import java.util.OptionalDouble;
  * What the data allow one to say about a step against its benchmark, in words a meeting can read:
  * "better", "worse", "no clear difference" or "too few to tell".
  *
- * <p>The rule (DESIGN §5): with fewer than {@value #MIN_PAIRS} tested pairs, "too few to tell";
+ * <p>The rule (DESIGN §5): with fewer than {@value #MIN_PAIRS} pairs, "too few to tell";
  * otherwise "better" when the two-sided Wilcoxon signed-rank p-value is below {@value #SIGNIFICANCE}
  * and the geometric-mean ratio (AvgRelMAE or GMRAE) is below 1, "worse" when p is below
  * {@value #SIGNIFICANCE} and the ratio is above 1, else "no clear difference". The 5% level is common
@@ -19,7 +19,7 @@ import java.util.OptionalDouble;
  *
  * @param label the finding
  * @param pValue the two-sided p-value it rests on; empty when no test could be run
- * @param pairs the number of non-zero paired differences the test ranked (zero differences carry no evidence)
+ * @param pairs the number of pairs compared, zero differences included (DESIGN §5 counts pairs)
  */
 public record Evidence(Label label, OptionalDouble pValue, int pairs) {
     /** Fewer tested pairs than this are "too few to tell". */
@@ -70,11 +70,15 @@ public record Evidence(Label label, OptionalDouble pValue, int pairs) {
         if (twoSided.alternative() != WilcoxonSignedRank.Alternative.TWO_SIDED) {
             throw new IllegalArgumentException("evidence is read from a two-sided test, not " + twoSided.alternative());
         }
-        return new Evidence(label(twoSided, geometricMeanRatio), twoSided.pValue(), twoSided.n());
+        return new Evidence(label(twoSided, geometricMeanRatio), twoSided.pValue(), pairs(twoSided));
+    }
+
+    private static int pairs(WilcoxonSignedRank.Result test) {
+        return test.n() + test.zerosDropped();
     }
 
     private static Label label(WilcoxonSignedRank.Result test, OptionalDouble ratio) {
-        if (test.n() < MIN_PAIRS) {
+        if (pairs(test) < MIN_PAIRS) {
             return Label.TOO_FEW_TO_TELL;
         }
         boolean significant = test.pValue().isPresent() && test.pValue().getAsDouble() < SIGNIFICANCE;

@@ -56,12 +56,16 @@ class EvidenceTest {
     }
 
     @Test
-    void countsOnlyNonZeroDifferencesAsPairs() {
-        // 35 pairs but 6 unchanged: 29 informative pairs are too few to tell.
+    void countsEveryPairUnchangedOnesIncluded() {
+        // DESIGN §5: "fewer than 30 pairs: too few to tell" counts pairs. 35 pairs, 6 unchanged:
+        // the test ranks the 29 that differ (all in the candidate's favour) and finds it better.
         long[] d = LongStream.rangeClosed(1, 35).map(i -> i <= 6 ? 0 : i * 1_000).toArray();
         Evidence evidence = Evidence.of(WilcoxonSignedRank.twoSided().test(d), OptionalDouble.of(0.5));
-        assertEquals(Label.TOO_FEW_TO_TELL, evidence.label());
-        assertEquals(29, evidence.pairs());
+        assertEquals(Label.BETTER, evidence.label());
+        assertEquals(35, evidence.pairs());
+        long[] few = LongStream.rangeClosed(1, 29).map(i -> i <= 6 ? 0 : i * 1_000).toArray();
+        assertEquals(Label.TOO_FEW_TO_TELL,
+                Evidence.of(WilcoxonSignedRank.twoSided().test(few), OptionalDouble.of(0.5)).label());
     }
 
     @Test
