@@ -179,8 +179,9 @@ final class BenchCommand implements Callable<Integer> {
     private Run child(List<String> args) throws IOException, InterruptedException {
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
         String classpath = System.getProperty("java.class.path");
-        List<String> cmd = new ArrayList<>(List.of(java, "-Xmx" + heap, "-Djava.awt.headless=true", "-cp", classpath,
-                Main.class.getName()));
+        // The same JVM options as the plenum launcher, so that a run is timed as users run it.
+        List<String> cmd = new ArrayList<>(List.of(java, "-Xmx" + heap, "-XX:+UseParallelGC", "-Djava.awt.headless=true",
+                "-cp", classpath, Main.class.getName()));
         cmd.addAll(args);
         Process p = new ProcessBuilder(cmd).redirectError(ProcessBuilder.Redirect.INHERIT).start();
         String line;
