@@ -95,10 +95,6 @@ public record Quantity(long micros) implements Comparable<Quantity> {
         return BigDecimal.valueOf(micros, SCALE);
     }
 
-    public double toDouble() {
-        return micros / (double) UNIT;
-    }
-
     /** This minus {@code other}, exactly, as millionths of a unit (may be negative). */
     public long minusMicros(Quantity other) {
         return Math.subtractExact(micros, other.micros);

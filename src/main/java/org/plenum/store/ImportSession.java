@@ -135,11 +135,6 @@ public final class ImportSession implements AutoCloseable {
         });
     }
 
-    /** Item ids by code as this transaction sees them (new items included). */
-    public Map<String, Integer> itemIds() {
-        return run(conn -> Catalogs.itemIds(c));
-    }
-
     public void commit() {
         run(conn -> {
             closeStatements();

@@ -74,16 +74,6 @@ public final class Ledger {
         });
     }
 
-    public int count() {
-        return workspace.read(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT count(*) FROM decisions");
-                    ResultSet rs = ps.executeQuery()) {
-                rs.next();
-                return rs.getInt(1);
-            }
-        });
-    }
-
     private static long nextBatch(Connection c) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("SELECT coalesce(max(batch), 0) + 1 FROM decisions");
                 ResultSet rs = ps.executeQuery()) {

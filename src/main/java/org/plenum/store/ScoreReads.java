@@ -69,13 +69,6 @@ public final class ScoreReads {
         return byItem != 0 ? byItem : Integer.compare(a.periods()[i], b.periods()[j]);
     }
 
-    /** Item codes by id. */
-    public Map<Integer, String> itemCodes() {
-        Map<Integer, String> codes = new HashMap<>();
-        workspace.catalog().items().forEach((code, id) -> codes.put(id, code));
-        return codes;
-    }
-
     /** One attribute of every item that has it: group, region, unit_value or a free attribute. */
     public Map<Integer, String> attribute(String name) {
         String sql = switch (name) {

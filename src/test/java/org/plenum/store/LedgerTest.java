@@ -91,6 +91,14 @@ class LedgerTest {
     }
 
     @Test
+    void startsWithTheDocumentedTagVocabulary() throws Exception {
+        Path db = TestWorkspace.create(dir);
+        try (Workspace ws = Workspace.open(db, TestWorkspace.TIMEOUT)) {
+            assertEquals(org.plenum.core.EventTags.STARTING, List.copyOf(ws.catalog().tags()));
+        }
+    }
+
+    @Test
     void usesWalForeignKeysAndTheBusyTimeout() throws Exception {
         Path db = TestWorkspace.create(dir);
         try (Workspace ws = Workspace.open(db, java.time.Duration.ofMillis(1234))) {
