@@ -68,43 +68,51 @@ public final class Score {
                 throw new UsageException("the workspace holds no periods yet: import actuals and forecasts first");
             }
             ScoreReads reads = new ScoreReads(ws);
-            for (String field : by) {
-                if (!fields(reads).contains(field)) {
-                    throw new UsageException("--by: expected one of " + String.join(", ", fields(reads)) + ", found \""
-                            + field + "\"");
-                }
-            }
+            checkFields(by, fields(reads));
             List<Series> read = ParallelReads.of(workspaces, db, catalog.stepNames(), catalog.ledgerStep(), lag);
-            Series actuals = read.get(0);
-            List<Series> steps = read.subList(1, read.size());
-            PairedSet set = PairedSet.of(actuals, catalog.stepNames(), steps, lag, placebo,
-                    frequency.seasonLength());
-            if (set.size() == 0) {
-                throw new UsageException("no scored pairs at lag " + lag + ": no (item, period) has an actual, the "
-                        + placebo.stepName() + " placebo and every step's forecast (" + set.leftOut() + " left out)");
-            }
+            PairedSet set = pairedSet(read, catalog, lag, placebo);
             BootstrapInterval bootstrap = BootstrapInterval.withDefaults().withDraws(draws);
             Scorecard all = Scorecard.of(set, placebo, bootstrap);
             LensReads lensReads = new LensReads(ws);
             List<ScoredChange> decisions = withLens ? lensReads.decisions() : List.of();
-            DecisionLens lens = new DecisionLens(actuals);
+            DecisionLens lens = new DecisionLens(read.get(0));
             List<Breakdown> breakdowns = new ArrayList<>();
             for (String field : by) {
                 breakdowns.add(new Breakdown(field, DECISION_FIELDS.contains(field) ? Map.of()
-                        : breakdown(reads, set, placebo, bootstrap, field, frequency),
+                        : breakdown(reads, set, placebo, field, frequency),
                         lens.groups(decisions, keys(reads, field, frequency))));
             }
-            return new Report(all, breakdowns, withLens ? lens(ws.catalog().ledgerStep(), lens, lensReads, decisions,
+            return new Report(all, breakdowns, withLens ? lens(catalog.ledgerStep(), lens, lensReads, decisions,
                     reads.unitValues()) : null);
         }
+    }
+
+    private static void checkFields(List<String> by, List<String> known) {
+        for (String field : by) {
+            if (!known.contains(field)) {
+                throw new UsageException("--by: expected one of " + String.join(", ", known) + ", found \"" + field
+                        + "\"");
+            }
+        }
+    }
+
+    /** @param read the actuals, then each step's series at the lag */
+    private static PairedSet pairedSet(List<Series> read, Catalog catalog, int lag, Placebo placebo) {
+        PairedSet set = PairedSet.of(read.get(0), catalog.stepNames(), read.subList(1, read.size()), lag, placebo,
+                catalog.frequency().seasonLength());
+        if (set.size() == 0) {
+            throw new UsageException("no scored pairs at lag " + lag + ": no (item, period) has an actual, the "
+                    + placebo.stepName() + " placebo and every step's forecast (" + set.leftOut() + " left out)");
+        }
+        return set;
     }
 
     /**
      * One scorecard per value of {@code by}. Rows are grouped through integer labels (a label per
      * item, or per cycle), and the groups are scored in parallel: each is independent and pure.
      */
-    private static Map<String, Scorecard> breakdown(ScoreReads reads, PairedSet set, Placebo placebo,
-            BootstrapInterval bootstrap, String by, Frequency frequency) {
+    private static Map<String, Scorecard> breakdown(ScoreReads reads, PairedSet set, Placebo placebo, String by,
+            Frequency frequency) {
         Labels labels = by.equals("cycle") ? Labels.ofCycles(set, frequency) : Labels.ofItems(set, reads.attribute(by));
         int[][] rows = labels.rows(set.items(), set.periods(), set.size());
         int[] leftOut = labels.counts(set.leftOutItems(), set.leftOutPeriods());
