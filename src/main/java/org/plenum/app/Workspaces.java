@@ -14,22 +14,23 @@ public final class Workspaces {
     public static final List<String> DEFAULT_STEPS = List.of("stat", "meeting", "final");
     public static final String DEFAULT_LEDGER_STEP = "meeting";
 
-    private final Duration busyTimeout;
+    private final String busyTimeoutSetting;
 
     public Workspaces(Map<String, String> env) {
-        this.busyTimeout = busyTimeout(env.get("PLENUM_BUSY_TIMEOUT"));
+        this.busyTimeoutSetting = env.get("PLENUM_BUSY_TIMEOUT");
     }
 
     public Workspace open(Path db) {
-        return Workspace.open(db, busyTimeout);
+        return Workspace.open(db, busyTimeout());
     }
 
     public Workspace create(Path db, List<String> steps, String ledgerStep) {
-        return Workspace.create(db, steps, ledgerStep, busyTimeout);
+        return Workspace.create(db, steps, ledgerStep, busyTimeout());
     }
 
+    /** Read when a workspace is opened, so that a bad setting is reported like any usage error. */
     public Duration busyTimeout() {
-        return busyTimeout;
+        return busyTimeout(busyTimeoutSetting);
     }
 
     private static Duration busyTimeout(String seconds) {

@@ -99,6 +99,14 @@ class DecideCommandTest {
     }
 
     @Test
+    void aMalformedBusyTimeoutIsAUsageErrorNotACrash() {
+        CliRun run = CliRun.of(Map.of("PLENUM_BUSY_TIMEOUT", "abc"), "tags", "--db", db.toString());
+        assertEquals(1, run.code());
+        assertEquals("plenum: PLENUM_BUSY_TIMEOUT: expected seconds between 0 and 3600, found \"abc\"",
+                run.err().strip());
+    }
+
+    @Test
     void aLockHeldPastTheTimeoutExitsThreeWithOneLine() throws Exception {
         try (Connection holder = DriverManager.getConnection("jdbc:sqlite:" + db);
                 Statement st = holder.createStatement()) {
