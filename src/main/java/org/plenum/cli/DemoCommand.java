@@ -61,7 +61,8 @@ final class DemoCommand implements Callable<Integer> {
         }
         out.printf("  events     %,d%n", s.events());
         out.printf("  ledger     %,d decisions over %d cycles%n", s.decisions(), s.decidedCycles());
-        out.println("The meeting screen is not built yet. Meanwhile, log a decision with plenum decide and export");
-        out.println("the ledger with plenum export ledger (add --db " + built.db() + ").");
+        out.println("The meeting screen is not built yet. Meanwhile, with --db " + built.db() + ":");
+        out.println("  plenum score --by author        every step and decision against a naive placebo");
+        out.println("  plenum decide ... / plenum export ledger");
     }
 }
