@@ -62,7 +62,7 @@ public final class Score {
             boolean withLens) {
         List<String> by = fields == null ? List.of() : fields;
         try (Workspace ws = workspaces.open(db)) {
-            Catalog catalog = ws.catalog();
+            Catalog catalog = ws.processSteps();
             Frequency frequency = catalog.frequency();
             if (frequency == null) {
                 throw new UsageException("the workspace holds no periods yet: import actuals and forecasts first");
@@ -75,12 +75,12 @@ public final class Score {
             Scorecard all = Scorecard.of(set, placebo, bootstrap);
             LensReads lensReads = new LensReads(ws);
             List<ScoredChange> decisions = withLens ? lensReads.decisions() : List.of();
-            DecisionLens lens = new DecisionLens(read.get(0));
+            DecisionLens lens = withLens ? new DecisionLens(read.get(0)) : null;
             List<Breakdown> breakdowns = new ArrayList<>();
             for (String field : by) {
                 breakdowns.add(new Breakdown(field, DECISION_FIELDS.contains(field) ? Map.of()
                         : breakdown(reads, set, placebo, field, frequency),
-                        lens.groups(decisions, keys(reads, field, frequency))));
+                        withLens ? lens.groups(decisions, keys(reads, field, frequency)) : List.of()));
             }
             return new Report(all, breakdowns, withLens ? lens(catalog.ledgerStep(), lens, lensReads, decisions,
                     reads.unitValues()) : null);

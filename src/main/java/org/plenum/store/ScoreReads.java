@@ -27,7 +27,7 @@ public final class ScoreReads {
      * step: the standing decision where there is one, else the previous step's value.
      */
     public Series stepAtLag(String stepName, int lag) {
-        Catalog catalog = workspace.catalog();
+        Catalog catalog = workspace.processSteps();
         Step step = catalog.step(stepName).orElseThrow(() -> new IllegalArgumentException("unknown step " + stepName));
         if (!step.name().equals(catalog.ledgerStep())) {
             return packed("forecasts", "step_id = " + step.id() + " AND period - cycle = " + lag);
@@ -39,7 +39,7 @@ public final class ScoreReads {
 
     /** The ledger's standing decisions at one lag, keyed by target period. */
     public Series decidedAtLag(int lag) {
-        Catalog catalog = workspace.catalog();
+        Catalog catalog = workspace.processSteps();
         Step step = catalog.step(catalog.ledgerStep()).orElseThrow();
         return series("SELECT d.item_id, d.period, d.quantity FROM decisions d WHERE d.step_id = " + step.id()
                 + " AND d.period - d.cycle = " + lag
