@@ -58,45 +58,57 @@ public final class DecisionLens {
     }
 
     LensGroup group(String key, List<ScoredChange> changes) {
-        int n = changes.size();
-        long[] priorErrors = new long[n];
-        long[] newErrors = new long[n];
-        long[] differences = new long[n];
-        double[] scaled = new double[n];
-        int right = 0;
-        int aimed = 0;
-        int overshoot = 0;
-        int optimistic = 0;
-        int improved = 0;
-        long overForecast = 0;
-        long actualSum = 0;
-        int scaledCount = 0;
-        for (int i = 0; i < n; i++) {
-            ScoredChange c = changes.get(i);
+        Tally t = new Tally(changes.size());
+        changes.forEach(c -> t.add(c, history.scale(c.item(), c.cycle())));
+        GeometricMeanRatio.Result ratio = GeometricMeanRatio.of(t.newErrors, t.priorErrors);
+        WilcoxonSignedRank.Result wilcoxon = WilcoxonSignedRank.twoSided().test(t.differences);
+        return new LensGroup(key, t.n, share(t.right, t.aimed), share(t.overshoot, t.right), share(t.optimistic, t.n),
+                share(t.improved, t.n), t.actualSum == 0 ? OptionalDouble.empty()
+                        : OptionalDouble.of(t.overForecast / (double) t.actualSum),
+                ratio, wilcoxon, Evidence.of(wilcoxon, ratio.value()), median(t.scaled, t.scaledCount));
+    }
+
+    /** The counts and columns of one group, gathered change by change. */
+    private static final class Tally {
+        final long[] priorErrors;
+        final long[] newErrors;
+        final long[] differences;
+        final double[] scaled;
+        int n;
+        int right;
+        int aimed;
+        int overshoot;
+        int optimistic;
+        int improved;
+        long overForecast;
+        long actualSum;
+        int scaledCount;
+
+        Tally(int size) {
+            priorErrors = new long[size];
+            newErrors = new long[size];
+            differences = new long[size];
+            scaled = new double[size];
+        }
+
+        void add(ScoredChange c, double scale) {
             AdjustmentOutcome o = AdjustmentOutcome.of(c.prior(), c.quantity(), c.actual());
-            priorErrors[i] = Math.abs(c.actual() - c.prior());
-            newErrors[i] = Math.abs(c.actual() - c.quantity());
-            differences[i] = priorErrors[i] - newErrors[i];
-            boolean hasAim = o.aim() == AdjustmentOutcome.Aim.RIGHT_DIRECTION
-                    || o.aim() == AdjustmentOutcome.Aim.WRONG_DIRECTION;
-            aimed += hasAim ? 1 : 0;
+            priorErrors[n] = Math.abs(c.actual() - c.prior());
+            newErrors[n] = Math.abs(c.actual() - c.quantity());
+            differences[n] = priorErrors[n] - newErrors[n];
+            n++;
+            aimed += o.aim() == AdjustmentOutcome.Aim.RIGHT_DIRECTION || o.aim() == AdjustmentOutcome.Aim.WRONG_DIRECTION
+                    ? 1 : 0;
             right += o.aim() == AdjustmentOutcome.Aim.RIGHT_DIRECTION ? 1 : 0;
             overshoot += o.overshoot() ? 1 : 0;
             optimistic += c.quantity() > c.actual() ? 1 : 0;
             improved += o.effect() == AdjustmentOutcome.Effect.IMPROVED ? 1 : 0;
             overForecast = Math.addExact(overForecast, c.quantity() - c.actual());
             actualSum = Math.addExact(actualSum, c.actual());
-            double scale = history.scale(c.item(), c.cycle());
             if (Double.isFinite(scale) && scale > 0) {
                 scaled[scaledCount++] = Math.abs(c.quantity() - c.prior()) / scale;
             }
         }
-        GeometricMeanRatio.Result ratio = GeometricMeanRatio.of(newErrors, priorErrors);
-        WilcoxonSignedRank.Result wilcoxon = WilcoxonSignedRank.twoSided().test(differences);
-        return new LensGroup(key, n, share(right, aimed), share(overshoot, right), share(optimistic, n),
-                share(improved, n), actualSum == 0 ? OptionalDouble.empty()
-                        : OptionalDouble.of(overForecast / (double) actualSum),
-                ratio, wilcoxon, Evidence.of(wilcoxon, ratio.value()), median(scaled, scaledCount));
     }
 
     private static OptionalDouble share(int part, int whole) {
