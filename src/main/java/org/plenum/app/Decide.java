@@ -143,13 +143,7 @@ public final class Decide {
 
     private static Period period(String option, String text, Frequency frequency, List<String> problems) {
         try {
-            Period p = Period.parse(text);
-            if (frequency != null && p.frequency() != frequency) {
-                problems.add(option + ": expected a " + frequency.word() + " period " + frequency.pattern()
-                        + ", found " + text);
-                return null;
-            }
-            return p;
+            return Period.parse(text, frequency);
         } catch (ValueException e) {
             problems.add(option + ": expected " + e.expected() + ", found \"" + text + "\"");
             return null;

@@ -24,11 +24,7 @@ public final class ExportLedger {
 
     private static Period parseCycle(String text, Workspace ws) {
         try {
-            Period p = Period.parse(text);
-            if (ws.frequency() != null && p.frequency() != ws.frequency()) {
-                throw new ValueException("a " + ws.frequency().word() + " period " + ws.frequency().pattern());
-            }
-            return p;
+            return Period.parse(text, ws.frequency());
         } catch (ValueException e) {
             throw new org.plenum.core.BadInputException("--cycle: expected " + e.expected() + ", found \"" + text + "\"");
         }

@@ -53,6 +53,20 @@ public record Period(Frequency frequency, int index) implements Comparable<Perio
         return PeriodParser.parse(text);
     }
 
+    /**
+     * Reads a period that must be of {@code expected} frequency (any, when {@code expected} is
+     * null), the workspace's.
+     *
+     * @throws ValueException naming what was expected
+     */
+    public static Period parse(String text, Frequency expected) {
+        Period p = parse(text);
+        if (expected != null && p.frequency() != expected) {
+            throw new ValueException("a " + expected.word() + " period " + expected.pattern());
+        }
+        return p;
+    }
+
     /** The period {@code n} steps later (earlier when negative). */
     public Period plus(int n) {
         return new Period(frequency, Math.addExact(index, n));

@@ -15,6 +15,12 @@ import java.util.Set;
 final class Catalogs {
     private Catalogs() {}
 
+    /** The catalog, with item ids and tags only when {@code full}. */
+    static Catalog of(Connection c, boolean full) throws SQLException {
+        return new Catalog(Meta.get(c, Meta.FREQUENCY).map(org.plenum.core.Frequency::ofWord).orElse(null), steps(c),
+                Meta.get(c, Meta.LEDGER_STEP).orElseThrow(), full ? itemIds(c) : Map.of(), full ? tags(c) : Set.of());
+    }
+
     static Map<String, Integer> itemIds(Connection c) throws SQLException {
         Map<String, Integer> ids = new HashMap<>();
         try (PreparedStatement ps = c.prepareStatement("SELECT item, id FROM items"); ResultSet rs = ps.executeQuery()) {

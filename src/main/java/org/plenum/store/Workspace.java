@@ -117,9 +117,7 @@ public final class Workspace implements AutoCloseable {
 
     /** Item codes, steps, tags and frequency as they stand now. */
     public Catalog catalog() {
-        return read(c -> new Catalog(Meta.get(c, Meta.FREQUENCY).map(Frequency::ofWord).orElse(null),
-                Catalogs.steps(c), Meta.get(c, Meta.LEDGER_STEP).orElseThrow(), Catalogs.itemIds(c),
-                Catalogs.tags(c)));
+        return read(c -> Catalogs.of(c, true));
     }
 
     /**
@@ -127,9 +125,7 @@ public final class Workspace implements AutoCloseable {
      * a hundred thousand items.
      */
     public Catalog processSteps() {
-        return read(c -> new Catalog(Meta.get(c, Meta.FREQUENCY).map(Frequency::ofWord).orElse(null),
-                Catalogs.steps(c), Meta.get(c, Meta.LEDGER_STEP).orElseThrow(), java.util.Map.of(),
-                java.util.Set.of()));
+        return read(c -> Catalogs.of(c, false));
     }
 
     /**
