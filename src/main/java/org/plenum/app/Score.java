@@ -16,6 +16,7 @@ import org.plenum.score.LensGroup;
 import org.plenum.score.ReasonWords;
 import org.plenum.score.TimeAndMoney;
 import org.plenum.store.LensReads;
+import org.plenum.score.PairErrors;
 import org.plenum.score.PairedSet;
 import org.plenum.score.Placebo;
 import org.plenum.score.Scorecard;
@@ -72,14 +73,15 @@ public final class Score {
             List<Series> read = ParallelReads.of(workspaces, db, catalog.stepNames(), catalog.ledgerStep(), lag);
             PairedSet set = pairedSet(read, catalog, lag, placebo);
             BootstrapInterval bootstrap = BootstrapInterval.withDefaults().withDraws(draws);
-            Scorecard all = Scorecard.of(set, placebo, bootstrap);
+            PairErrors errors = PairErrors.of(set);
+            Scorecard all = Scorecard.of(errors, placebo, bootstrap);
             LensReads lensReads = new LensReads(ws);
             List<ScoredChange> decisions = withLens ? lensReads.decisions() : List.of();
             DecisionLens lens = withLens ? new DecisionLens(read.get(0)) : null;
             List<Breakdown> breakdowns = new ArrayList<>();
             for (String field : by) {
                 breakdowns.add(new Breakdown(field, DECISION_FIELDS.contains(field) ? Map.of()
-                        : breakdown(reads, set, placebo, field, frequency),
+                        : breakdown(reads, errors, placebo, field, frequency),
                         withLens ? lens.groups(decisions, keys(reads, field, frequency)) : List.of()));
             }
             return new Report(all, breakdowns, withLens ? lens(catalog.ledgerStep(), lens, lensReads, decisions,
@@ -109,22 +111,27 @@ public final class Score {
 
     /**
      * One scorecard per value of {@code by}. Rows are grouped through integer labels (a label per
-     * item, or per cycle), and the groups are scored in parallel: each is independent and pure.
+     * item, or per cycle); the groups share the set's ranked errors.
      */
-    private static Map<String, Scorecard> breakdown(ScoreReads reads, PairedSet set, Placebo placebo, String by,
+    private static Map<String, Scorecard> breakdown(ScoreReads reads, PairErrors errors, Placebo placebo, String by,
             Frequency frequency) {
+        PairedSet set = errors.set();
         Labels labels = by.equals("cycle") ? Labels.ofCycles(set, frequency) : Labels.ofItems(set, reads.attribute(by));
         int[][] rows = labels.rows(set.items(), set.periods(), set.size());
         int[] leftOut = labels.counts(set.leftOutItems(), set.leftOutPeriods());
-        Scorecard[] cards = new Scorecard[rows.length];
-        // Intervals are drawn for the whole scorecard only (see Scorecard.of).
-        java.util.stream.IntStream.range(0, rows.length).parallel().filter(g -> rows[g].length > 0)
-                .forEach(g -> cards[g] = Scorecard.of(set, placebo, null, rows[g], leftOut[g]));
-        Map<String, Scorecard> out = new TreeMap<>();
+        List<Integer> scored = new ArrayList<>();
         for (int g = 0; g < rows.length; g++) {
-            if (cards[g] != null) {
-                out.put(labels.names().get(g), cards[g]);
+            if (rows[g].length > 0) {
+                scored.add(g);
             }
+        }
+        // Intervals are drawn for the whole scorecard only (see Scorecard.of).
+        List<Scorecard> cards = Scorecard.of(errors, placebo, null,
+                scored.stream().map(g -> rows[g]).toArray(int[][]::new),
+                scored.stream().mapToInt(g -> leftOut[g]).toArray());
+        Map<String, Scorecard> out = new TreeMap<>();
+        for (int k = 0; k < scored.size(); k++) {
+            out.put(labels.names().get(scored.get(k)), cards.get(k));
         }
         return out;
     }

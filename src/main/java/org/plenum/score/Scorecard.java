@@ -1,9 +1,11 @@
 package org.plenum.score;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.stream.IntStream;
 import org.plenum.core.MeanAbsoluteScaledError;
 import org.plenum.core.PercentageBias;
 import org.plenum.core.Wape;
@@ -16,50 +18,96 @@ public record Scorecard(int lag, Placebo placebo, int pairs, int leftOut, List<S
 
     /** The scorecard over every pair of {@code set}. */
     public static Scorecard of(PairedSet set, Placebo placebo, BootstrapInterval bootstrap) {
-        return of(set, placebo, bootstrap, allRows(set.size()), set.leftOut());
+        return of(PairErrors.of(set), placebo, bootstrap);
+    }
+
+    /** The scorecard over every pair of the set behind {@code errors}. */
+    public static Scorecard of(PairErrors errors, Placebo placebo, BootstrapInterval bootstrap) {
+        PairedSet set = errors.set();
+        return of(errors, placebo, bootstrap, new int[][] {allRows(set.size())}, new int[] {set.leftOut()}).get(0);
     }
 
     /**
-     * The scorecard over the given rows of {@code set} (a breakdown's group), rows sorted by item.
-     * Without a bootstrap, comparisons carry no interval: breakdowns leave it out, because a
-     * thousand draws per group and step cost more than all the rest of the scorecard.
+     * One scorecard per group of rows of the set (a breakdown's groups; each group non-empty and
+     * sorted by item). Every (group, step) is scored independently, in parallel. Without a
+     * bootstrap, comparisons carry no interval: breakdowns leave it out, because a thousand draws
+     * per group and step cost more than all the rest of the scorecard.
+     *
+     * @param leftOut the pairs left out of each group
      */
-    public static Scorecard of(PairedSet set, Placebo placebo, BootstrapInterval bootstrap, int[] rows, int leftOut) {
-        long[] actuals = pick(set.actuals(), rows);
-        long[][] errors = new long[set.sources().size()][];
-        List<StepScore> steps = new ArrayList<>();
-        OptionalDouble placeboAccuracy = OptionalDouble.empty();
-        for (int s = 0; s < set.sources().size(); s++) {
-            long[] forecasts = pick(set.forecasts()[s], rows);
-            errors[s] = absoluteErrors(actuals, forecasts);
-            Wape.Result wape = Wape.of(actuals, forecasts);
-            Optional<Comparison> vsPrevious = s == 0 ? Optional.empty()
-                    : Optional.of(compare(set, rows, errors[s], errors[s - 1], wape.accuracy(),
-                            steps.get(s - 1).accuracy(), set.sources().get(s - 1), bootstrap));
-            if (s == 0) {
-                placeboAccuracy = wape.accuracy();
-            }
-            MeanAbsoluteScaledError.Pooled mase = MeanAbsoluteScaledError.pooled(errors[s], pickScales(set.scales(), rows));
-            steps.add(new StepScore(set.sources().get(s), rows.length, wape.meanAbsoluteError(), wape.value(),
-                    wape.accuracy(), PercentageBias.of(actuals, forecasts).value(), mase.value(), mase.leftOut(),
-                    vsPrevious, s == 0 ? OptionalDouble.empty() : difference(wape.accuracy(), placeboAccuracy)));
+    public static List<Scorecard> of(PairErrors errors, Placebo placebo, BootstrapInterval bootstrap, int[][] rows,
+            int[] leftOut) {
+        PairedSet set = errors.set();
+        int sources = set.sources().size();
+        WilcoxonSignedRank.Result[][] tests = new WilcoxonSignedRank.Result[sources][];
+        int[] group = groupOfRow(rows, set.size());
+        IntStream.range(1, sources).parallel().forEach(s -> tests[s] = WilcoxonSignedRank.twoSided()
+                .test(errors.vsPrevious(s), group, rows.length));
+        Part[] parts = new Part[rows.length * sources];
+        IntStream.range(0, parts.length).parallel().forEach(t -> {
+            int g = t / sources;
+            int s = t % sources;
+            parts[t] = Part.of(errors, s, rows[g], s == 0 ? null : tests[s][g], bootstrap);
+        });
+        List<Scorecard> cards = new ArrayList<>();
+        for (int g = 0; g < rows.length; g++) {
+            cards.add(assemble(set, placebo, Arrays.copyOfRange(parts, g * sources, (g + 1) * sources), rows[g].length,
+                    leftOut[g]));
         }
-        return new Scorecard(set.lag(), placebo, rows.length, leftOut, steps);
+        return cards;
     }
 
-    private static Comparison compare(PairedSet set, int[] rows, long[] errors, long[] previousErrors,
-            OptionalDouble accuracy, OptionalDouble previousAccuracy, String previous, BootstrapInterval bootstrap) {
-        // bootstrap may be null: see of(PairedSet, Placebo, BootstrapInterval, int[], int)
-        AvgRelMae.Result avgRelMae = AvgRelMae.of(perItem(set.items(), rows, errors, previousErrors));
-        long[] differences = new long[errors.length];
-        for (int i = 0; i < errors.length; i++) {
-            differences[i] = previousErrors[i] - errors[i];
+    /** One (group, step): its accuracy measures and, after the placebo, its comparison's parts. */
+    private record Part(Wape.Result wape, PercentageBias.Result bias, MeanAbsoluteScaledError.Pooled mase,
+            AvgRelMae.Result avgRelMae, Optional<BootstrapInterval.Interval> interval, GeometricMeanRatio.Result ratio,
+            WilcoxonSignedRank.Result wilcoxon) {
+
+        static Part of(PairErrors errors, int s, int[] rows, WilcoxonSignedRank.Result wilcoxon,
+                BootstrapInterval bootstrap) {
+            PairedSet set = errors.set();
+            long[] actuals = pick(set.actuals(), rows);
+            long[] forecasts = pick(set.forecasts()[s], rows);
+            long[] absolute = pick(errors.absolute(s), rows);
+            MeanAbsoluteScaledError.Pooled mase = MeanAbsoluteScaledError.pooled(absolute, pick(set.scales(), rows));
+            if (s == 0) {
+                return new Part(Wape.of(actuals, forecasts), PercentageBias.of(actuals, forecasts), mase, null,
+                        Optional.empty(), null, null);
+            }
+            long[] previous = pick(errors.absolute(s - 1), rows);
+            AvgRelMae.Result avgRelMae = AvgRelMae.of(perItem(set.items(), rows, absolute, previous));
+            return new Part(Wape.of(actuals, forecasts), PercentageBias.of(actuals, forecasts), mase, avgRelMae,
+                    bootstrap == null ? Optional.empty() : bootstrap.of(avgRelMae.logRatios()),
+                    GeometricMeanRatio.of(absolute, previous), wilcoxon);
         }
-        WilcoxonSignedRank.Result wilcoxon = WilcoxonSignedRank.twoSided().test(differences);
-        return new Comparison(previous, difference(accuracy, previousAccuracy), avgRelMae,
-                bootstrap == null ? Optional.empty() : bootstrap.of(avgRelMae.logRatios()),
-                GeometricMeanRatio.of(errors, previousErrors), wilcoxon,
-                Evidence.of(wilcoxon, avgRelMae.value()));
+    }
+
+    private static Scorecard assemble(PairedSet set, Placebo placebo, Part[] parts, int pairs, int leftOut) {
+        List<StepScore> steps = new ArrayList<>();
+        OptionalDouble placeboAccuracy = parts[0].wape().accuracy();
+        for (int s = 0; s < parts.length; s++) {
+            Part part = parts[s];
+            OptionalDouble accuracy = part.wape().accuracy();
+            Optional<Comparison> vsPrevious = s == 0 ? Optional.empty()
+                    : Optional.of(new Comparison(set.sources().get(s - 1),
+                            difference(accuracy, parts[s - 1].wape().accuracy()), part.avgRelMae(), part.interval(),
+                            part.ratio(), part.wilcoxon(), Evidence.of(part.wilcoxon(), part.avgRelMae().value())));
+            steps.add(new StepScore(set.sources().get(s), pairs, part.wape().meanAbsoluteError(), part.wape().value(),
+                    accuracy, part.bias().value(), part.mase().value(), part.mase().leftOut(), vsPrevious,
+                    s == 0 ? OptionalDouble.empty() : difference(accuracy, placeboAccuracy)));
+        }
+        return new Scorecard(set.lag(), placebo, pairs, leftOut, steps);
+    }
+
+    /** The group of each row of the set, −1 for rows in no group. */
+    private static int[] groupOfRow(int[][] rows, int size) {
+        int[] group = new int[size];
+        Arrays.fill(group, -1);
+        for (int g = 0; g < rows.length; g++) {
+            for (int row : rows[g]) {
+                group[row] = g;
+            }
+        }
+        return group;
     }
 
     /** One AvgRelMAE series per item: its rows are contiguous because pairs are sorted by item. */
@@ -79,14 +127,6 @@ public record Scorecard(int lag, Placebo placebo, int pairs, int leftOut, List<S
             }
         }
         return series;
-    }
-
-    static long[] absoluteErrors(long[] actuals, long[] forecasts) {
-        long[] errors = new long[actuals.length];
-        for (int i = 0; i < actuals.length; i++) {
-            errors[i] = Math.abs(actuals[i] - forecasts[i]);
-        }
-        return errors;
     }
 
     private static OptionalDouble difference(OptionalDouble a, OptionalDouble b) {
@@ -110,7 +150,7 @@ public record Scorecard(int lag, Placebo placebo, int pairs, int leftOut, List<S
         return out;
     }
 
-    private static double[] pickScales(double[] column, int[] rows) {
+    private static double[] pick(double[] column, int[] rows) {
         double[] out = new double[rows.length];
         for (int i = 0; i < rows.length; i++) {
             out[i] = column[rows[i]];

@@ -125,22 +125,52 @@ public final class WilcoxonSignedRank {
      * @throws ArithmeticException when {@code d − mu} leaves the long range
      */
     public Result test(long[] differenceMicros) {
-        long[] nonZero = Arrays.stream(differenceMicros).map(d -> Math.subtractExact(d, muMicros))
-                .filter(d -> d != 0).toArray();
-        int zeros = differenceMicros.length - nonZero.length;
-        if (nonZero.length == 0) {
-            OptionalDouble p = zeros == 0 ? OptionalDouble.empty() : OptionalDouble.of(1);
-            return new Result(0, 0, zeros, false, Method.NONE, alternative, continuityCorrection, p);
+        return test(rank(differenceMicros), new int[differenceMicros.length], 1)[0];
+    }
+
+    /**
+     * Ranks the sizes of {@code d − mu} once, for {@link #test(Ranking, int[], int)}.
+     *
+     * @throws ArithmeticException when {@code d − mu} leaves the long range
+     */
+    public Ranking rank(long[] differenceMicros) {
+        long[] shifted = new long[differenceMicros.length];
+        for (int i = 0; i < shifted.length; i++) {
+            shifted[i] = Math.subtractExact(differenceMicros[i], muMicros);
         }
-        Ranked ranked = Ranked.of(nonZero);
-        boolean ties = ranked.tieTerm() > 0;
-        if (!(exactAllowed && nonZero.length < EXACT_BELOW && !ties)) {
-            return new Result(ranked.positiveRankSum(), nonZero.length, zeros, ties, Method.NORMAL, alternative,
-                    continuityCorrection, OptionalDouble.of(normalPValue(ranked, nonZero.length)));
+        return Ranking.of(shifted);
+    }
+
+    /**
+     * Tests each group of one ranked sample: {@code group[i]} is the group of difference {@code i}
+     * (from 0 to {@code groups − 1}, or negative for none). The result is exactly what
+     * {@link #test(long[])} gives on each group's differences alone — ranks within a group are the
+     * group's own — but the sample is sorted once for all groups: a group's members meet in the
+     * sample's size order, so one pass over that order ranks every group.
+     */
+    public Result[] test(Ranking ranking, int[] group, int groups) {
+        GroupRanks ranks = GroupRanks.of(ranking, group, groups);
+        Result[] results = new Result[groups];
+        long[][] exactSamples = null;
+        for (int g = 0; g < groups; g++) {
+            int n = ranks.n[g];
+            int zeros = ranks.zeros[g];
+            boolean ties = ranks.tieTerm[g] > 0;
+            if (n == 0) {
+                OptionalDouble p = zeros == 0 ? OptionalDouble.empty() : OptionalDouble.of(1);
+                results[g] = new Result(0, 0, zeros, false, Method.NONE, alternative, continuityCorrection, p);
+            } else if (!(exactAllowed && n < EXACT_BELOW && !ties)) {
+                results[g] = new Result(ranks.positive[g], n, zeros, ties, Method.NORMAL, alternative,
+                        continuityCorrection, OptionalDouble.of(normalPValue(ranks.positive[g], ranks.tieTerm[g], n)));
+            } else {
+                exactSamples = exactSamples != null ? exactSamples : ranking.nonZeroByGroup(group, ranks.n);
+                WilcoxonSignedRankTest.Result library = configured(Method.EXACT)
+                        .test(SignedRanks.of(exactSamples[g]).values());
+                results[g] = new Result(library.getStatistic(), n, zeros, false, Method.EXACT, alternative,
+                        continuityCorrection, OptionalDouble.of(library.getPValue()));
+            }
         }
-        WilcoxonSignedRankTest.Result library = configured(Method.EXACT).test(SignedRanks.of(nonZero).values());
-        return new Result(library.getStatistic(), nonZero.length, zeros, false, Method.EXACT, alternative,
-                continuityCorrection, OptionalDouble.of(library.getPValue()));
+        return results;
     }
 
     /**
@@ -149,10 +179,10 @@ public final class WilcoxonSignedRank {
      * correction of 0.5 towards the mean. Written out on primitives rather than handed to the
      * library because the library ranks boxed objects, which a million pairs make slow.
      */
-    private double normalPValue(Ranked ranked, int n) {
+    private double normalPValue(double positiveRankSum, double tieTerm, int n) {
         double mean = n * (n + 1.0) / 4;
-        double variance = n * (n + 1.0) * (2.0 * n + 1) / 24 - ranked.tieTerm() / 48;
-        double shift = ranked.positiveRankSum() - mean;
+        double variance = n * (n + 1.0) * (2.0 * n + 1) / 24 - tieTerm / 48;
+        double shift = positiveRankSum - mean;
         double correction = !continuityCorrection ? 0
                 : switch (alternative) {
                     case TWO_SIDED -> Math.signum(shift) * 0.5;
@@ -172,31 +202,154 @@ public final class WilcoxonSignedRank {
     private static final NormalDistribution STANDARD_NORMAL = NormalDistribution.of(0, 1);
 
     /**
-     * Average ranks of |d| over primitive longs: the sum of the ranks of positive differences and
-     * the tie term Σ(t³ − t), both decided on the exact values.
+     * A sample of exact differences with the sizes of its non-zero ones ranked: each difference's
+     * dense size rank, and the non-zero differences in increasing size. Built once per sample
+     * (one sort of primitive longs) and shared by every grouping of it. Immutable.
      */
-    private record Ranked(double positiveRankSum, double tieTerm) {
-        static Ranked of(long[] nonZero) {
-            long[] keyed = new long[nonZero.length];
-            for (int i = 0; i < nonZero.length; i++) {
-                // |d| in the high bits, the sign in the lowest: sorting groups equal sizes together.
-                keyed[i] = Math.multiplyExact(Math.absExact(nonZero[i]), 2) | (nonZero[i] > 0 ? 1 : 0);
+    public static final class Ranking {
+        private final long[] differences;
+        /** Indices of the non-zero differences, smallest |d| first (equal sizes in index order). */
+        private final int[] bySize;
+        /**
+         * For each entry of {@code bySize}: {@code 2 · size rank + (1 if d > 0)}. Walking the sizes
+         * then reads this array in order instead of two arrays at random places.
+         */
+        private final int[] signedRankBySize;
+
+        /** @param sizeRank dense rank of |d| among the distinct non-zero sizes; −1 where d is zero */
+        private Ranking(long[] differences, int[] sizeRank, int[] bySize) {
+            this.differences = differences;
+            this.bySize = bySize;
+            this.signedRankBySize = new int[bySize.length];
+            for (int p = 0; p < bySize.length; p++) {
+                signedRankBySize[p] = 2 * sizeRank[bySize[p]] + (differences[bySize[p]] > 0 ? 1 : 0);
             }
-            Arrays.sort(keyed);
-            double positive = 0;
-            double tieTerm = 0;
-            for (int start = 0; start < keyed.length; ) {
-                int end = start;
-                int positives = 0;
-                while (end < keyed.length && keyed[end] >> 1 == keyed[start] >> 1) {
-                    positives += (int) (keyed[end++] & 1);
+        }
+
+        static Ranking of(long[] differences) {
+            int nonZero = 0;
+            for (long d : differences) {
+                nonZero += d != 0 ? 1 : 0;
+            }
+            long[] sizes = new long[nonZero];
+            int k = 0;
+            for (long d : differences) {
+                if (d != 0) {
+                    sizes[k++] = Math.absExact(d);
                 }
-                double t = end - start;
-                positive += positives * (start + 1 + end) / 2.0;
-                tieTerm += t * t * t - t;
-                start = end;
             }
-            return new Ranked(positive, tieTerm);
+            Arrays.sort(sizes);
+            int distinct = 0;
+            for (int i = 0; i < sizes.length; i++) {
+                if (i == 0 || sizes[i] != sizes[i - 1]) {
+                    sizes[distinct++] = sizes[i];
+                }
+            }
+            int[] sizeRank = new int[differences.length];
+            int[] firstOfRank = new int[distinct + 1];
+            for (int i = 0; i < differences.length; i++) {
+                sizeRank[i] = differences[i] == 0 ? -1
+                        : Arrays.binarySearch(sizes, 0, distinct, Math.absExact(differences[i]));
+                if (sizeRank[i] >= 0) {
+                    firstOfRank[sizeRank[i] + 1]++;
+                }
+            }
+            for (int r = 0; r < distinct; r++) {
+                firstOfRank[r + 1] += firstOfRank[r];
+            }
+            int[] bySize = new int[nonZero];
+            for (int i = 0; i < differences.length; i++) {
+                if (sizeRank[i] >= 0) {
+                    bySize[firstOfRank[sizeRank[i]]++] = i;
+                }
+            }
+            return new Ranking(differences, sizeRank, bySize);
+        }
+
+        public int size() {
+            return differences.length;
+        }
+
+        /** Each group's non-zero differences, in sample order; {@code counts[g]} of them. */
+        long[][] nonZeroByGroup(int[] group, int[] counts) {
+            long[][] out = new long[counts.length][];
+            int[] filled = new int[counts.length];
+            for (int g = 0; g < counts.length; g++) {
+                out[g] = new long[counts[g]];
+            }
+            for (int i = 0; i < differences.length; i++) {
+                if (group[i] >= 0 && differences[i] != 0) {
+                    out[group[i]][filled[group[i]]++] = differences[i];
+                }
+            }
+            return out;
+        }
+    }
+
+    /**
+     * Per group: the sum of the average ranks of its positive differences, the tie term Σ(t³ − t)
+     * over its tie groups, and its counts. Equal sizes within a group are consecutive in the
+     * sample's size order, so a group's tie group closes when the next size of that group arrives.
+     */
+    private static final class GroupRanks {
+        final double[] positive;
+        final double[] tieTerm;
+        final int[] n;
+        final int[] zeros;
+        private final int[] openRank;
+        private final int[] openCount;
+        private final int[] openPositives;
+
+        private GroupRanks(int groups) {
+            positive = new double[groups];
+            tieTerm = new double[groups];
+            n = new int[groups];
+            zeros = new int[groups];
+            openRank = new int[groups];
+            openCount = new int[groups];
+            openPositives = new int[groups];
+            Arrays.fill(openRank, -1);
+        }
+
+        static GroupRanks of(Ranking ranking, int[] group, int groups) {
+            if (group.length != ranking.size()) {
+                throw new IllegalArgumentException(ranking.size() + " differences but " + group.length + " group labels");
+            }
+            GroupRanks ranks = new GroupRanks(groups);
+            for (int i = 0; i < group.length; i++) {
+                if (group[i] >= 0 && ranking.differences[i] == 0) {
+                    ranks.zeros[group[i]]++;
+                }
+            }
+            int[] bySize = ranking.bySize;
+            int[] signedRanks = ranking.signedRankBySize;
+            for (int p = 0; p < bySize.length; p++) {
+                int g = group[bySize[p]];
+                if (g < 0) {
+                    continue;
+                }
+                int rank = signedRanks[p] >> 1;
+                if (rank != ranks.openRank[g]) {
+                    ranks.close(g);
+                    ranks.openRank[g] = rank;
+                }
+                ranks.openCount[g]++;
+                ranks.openPositives[g] += signedRanks[p] & 1;
+            }
+            for (int g = 0; g < groups; g++) {
+                ranks.close(g);
+            }
+            return ranks;
+        }
+
+        /** Ends group g's current tie group: its members share the ranks n+1 … n+t, on average n + (t+1)/2. */
+        private void close(int g) {
+            double t = openCount[g];
+            positive[g] += openPositives[g] * (n[g] + (t + 1) / 2);
+            tieTerm[g] += t * t * t - t;
+            n[g] += openCount[g];
+            openCount[g] = 0;
+            openPositives[g] = 0;
         }
     }
 
