@@ -6,6 +6,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
+import org.plenum.store.NativeLibrary;
 
 /** The {@code plenum} program: the only place that calls {@code System.exit}. */
 public final class Main {
@@ -22,8 +23,9 @@ public final class Main {
     }
 
     /**
-     * sqlite-jdbc unpacks its native library into {@code java.io.tmpdir}; on hosts where /tmp is
-     * mounted noexec that fails, so it goes to the user's cache directory instead.
+     * sqlite-jdbc unpacks its native library into {@code java.io.tmpdir} at every start; on hosts
+     * where /tmp is mounted noexec that fails, and it costs time everywhere, so it is unpacked once
+     * into the user's cache directory instead.
      */
     private static void useCacheForNativeLibrary() {
         if (System.getProperty("org.sqlite.tmpdir") != null) {
@@ -35,6 +37,7 @@ public final class Main {
         try {
             Files.createDirectories(dir);
             System.setProperty("org.sqlite.tmpdir", dir.toString());
+            NativeLibrary.useCopyIn(dir);
         } catch (IOException | SecurityException e) {
             // keep the driver's default; it reports clearly if that fails too
         }
