@@ -68,10 +68,10 @@ public final class Agenda {
                 throw noCandidates(reads, cycle, stat, lags);
             }
             History history = History.of(window, reads.actualsBetween(actualsStart, c - 1));
-            Set<Integer> short_ = AgendaRanking.needingOlderHistory(candidates, history, c);
-            if (!short_.isEmpty()) {
-                history = history.withOlder(reads.forecastsBefore(stat.id(), short_, windowStart, c, lags),
-                        reads.actualsBefore(short_, actualsStart));
+            Set<Integer> shortWindows = AgendaRanking.needingOlderHistory(candidates, history, c);
+            if (!shortWindows.isEmpty()) {
+                history = history.withOlder(reads.forecastsBefore(stat.id(), shortWindows, windowStart, c, lags),
+                        reads.actualsBefore(shortWindows, actualsStart));
             }
             Map<Integer, String> groups = groups(items);
             TrackRecords records = new TrackRecords(ReviewedPairs.changed(humanValues(reads, catalog, stat, c, lags),
