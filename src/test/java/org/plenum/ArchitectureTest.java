@@ -13,7 +13,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
- * The layering of DESIGN §8, checked on the sources: a pure core and scoring without I/O,
+ * The layering of DESIGN §8, checked on the sources: a pure core, scoring and agenda without I/O,
  * dependencies pointing one way, and SQL only in the store.
  */
 class ArchitectureTest {
@@ -22,16 +22,20 @@ class ArchitectureTest {
     /** What each package must not import. */
     private static final Map<String, List<String>> FORBIDDEN = Map.of(
             "core", List.of("org.plenum.store", "org.plenum.io", "org.plenum.app", "org.plenum.cli", "org.plenum.score",
-                    "org.plenum.demo", "java.io", "java.sql", "java.nio.file", "org.sqlite", "picocli",
+                    "org.plenum.agenda", "org.plenum.demo", "java.io", "java.sql", "java.nio.file", "org.sqlite", "picocli",
                     "com.googlecode.lanterna"),
             "score", List.of("org.plenum.store", "org.plenum.io", "org.plenum.app", "org.plenum.cli", "org.plenum.demo",
+                    "org.plenum.agenda", "java.io", "java.sql", "java.nio.file", "org.sqlite", "picocli",
+                    "com.googlecode.lanterna"),
+            // The agenda is pure like scoring: values in, values out; it may use core and score.
+            "agenda", List.of("org.plenum.store", "org.plenum.io", "org.plenum.app", "org.plenum.cli", "org.plenum.demo",
                     "java.io", "java.sql", "java.nio.file", "org.sqlite", "picocli", "com.googlecode.lanterna"),
-            "store", List.of("org.plenum.io", "org.plenum.app", "org.plenum.cli", "org.plenum.score"),
-            "io", List.of("org.plenum.app", "org.plenum.cli", "org.plenum.score", "java.sql"),
+            "store", List.of("org.plenum.io", "org.plenum.app", "org.plenum.cli", "org.plenum.score", "org.plenum.agenda"),
+            "io", List.of("org.plenum.app", "org.plenum.cli", "org.plenum.score", "org.plenum.agenda", "java.sql"),
             "app", List.of("org.plenum.cli", "java.sql"));
 
     @ParameterizedTest
-    @ValueSource(strings = {"core", "score", "store", "io", "app"})
+    @ValueSource(strings = {"core", "score", "agenda", "store", "io", "app"})
     void importsOnlyWhatItsLayerMay(String pkg) throws IOException {
         List<String> violations = new ArrayList<>();
         for (Path file : sources(MAIN.resolve(pkg))) {
@@ -46,7 +50,7 @@ class ArchitectureTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"core", "score", "io", "app", "cli", "demo"})
+    @ValueSource(strings = {"core", "score", "agenda", "io", "app", "cli", "demo"})
     void speaksNoSqlOutsideTheStore(String pkg) throws IOException {
         List<String> violations = new ArrayList<>();
         for (Path file : sources(MAIN.resolve(pkg))) {

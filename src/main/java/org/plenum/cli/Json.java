@@ -41,9 +41,14 @@ final class Json {
         return this;
     }
 
+    /** A string, or null when {@code value} is null. */
     Json field(String key, String value) {
         key(key);
-        string(value);
+        if (value == null) {
+            out.append("null");
+        } else {
+            string(value);
+        }
         needComma = true;
         return this;
     }
@@ -59,6 +64,30 @@ final class Json {
     Json field(String key, OptionalDouble value) {
         key(key);
         out.append(value.isPresent() && Double.isFinite(value.getAsDouble()) ? number(value.getAsDouble()) : "null");
+        needComma = true;
+        return this;
+    }
+
+    /** A true/false value, or null when there is none. */
+    Json field(String key, Boolean value) {
+        key(key);
+        out.append(value == null ? "null" : value.toString());
+        needComma = true;
+        return this;
+    }
+
+    /** A string element of the array being written. */
+    Json value(String value) {
+        comma();
+        string(value);
+        needComma = true;
+        return this;
+    }
+
+    /** A number element of the array being written. */
+    Json value(long value) {
+        comma();
+        out.append(value);
         needComma = true;
         return this;
     }

@@ -9,24 +9,24 @@ import java.util.Arrays;
  * training 1992Q1–2007Q4 (64 values), test 2008Q1–2010Q2 (10 values), and the four benchmark
  * forecasts of FPP2 §3.4 over the test quarters. Quantities in millionths.
  */
-final class AusBeer {
+public final class AusBeer {
     private AusBeer() {
     }
 
-    static final long[] TRAIN = units(
+    public static final long[] TRAIN = units(
             443, 410, 420, 532, 433, 421, 410, 512, 449, 381, 423, 531, 426, 408, 416, 520,
             409, 398, 398, 507, 432, 398, 406, 526, 428, 397, 403, 517, 435, 383, 424, 521,
             421, 402, 414, 500, 451, 380, 416, 492, 428, 408, 406, 506, 435, 380, 421, 490,
             435, 390, 412, 454, 416, 403, 408, 482, 438, 386, 405, 491, 427, 383, 394, 473);
 
-    static final long[] TEST = units(420, 390, 410, 488, 415, 398, 419, 488, 414, 374);
+    public static final long[] TEST = units(420, 390, 410, 488, 415, 398, 419, 488, 414, 374);
 
     /** Mean of the training values, 435.375 (exact in millionths: 27864/64). */
     static final long[] MEAN = flat(435_375_000L);
     /** Last training value, 473. */
     static final long[] NAIVE = flat(473_000_000L);
     /** Same quarter of the last training year. */
-    static final long[] SEASONAL_NAIVE = units(427, 383, 394, 473, 427, 383, 394, 473, 427, 383);
+    public static final long[] SEASONAL_NAIVE = units(427, 383, 394, 473, 427, 383, 394, 473, 427, 383);
 
     /**
      * Drift {@code 473 + h·(473 − 443)/63}, rounded to the nearest millionth (not exact in decimals:
