@@ -32,18 +32,23 @@ public final class Decide {
 
     public static List<Recorded> run(Workspaces workspaces, Path db, DecisionRequest request) {
         try (Workspace ws = workspaces.open(db)) {
-            List<DecisionDraft> drafts = drafts(ws, request);
-            List<Long> ids = new Ledger(ws).append(drafts);
-            List<Recorded> out = new ArrayList<>();
-            for (int i = 0; i < drafts.size(); i++) {
-                DecisionDraft d = drafts.get(i);
-                out.add(new Recorded(ids.get(i), d.period(), d.prior(), d.quantity(), d.kept()));
-            }
-            return out;
+            return record(ws, request, null);
         }
     }
 
-    static List<DecisionDraft> drafts(Workspace ws, DecisionRequest r) {
+    /** Checks and records a decision on an open workspace, in {@code meeting} when it is not null. */
+    static List<Recorded> record(Workspace ws, DecisionRequest request, Long meeting) {
+        List<DecisionDraft> drafts = drafts(ws, request, meeting);
+        List<Long> ids = new Ledger(ws).append(drafts);
+        List<Recorded> out = new ArrayList<>();
+        for (int i = 0; i < drafts.size(); i++) {
+            DecisionDraft d = drafts.get(i);
+            out.add(new Recorded(ids.get(i), d.period(), d.prior(), d.quantity(), d.kept()));
+        }
+        return out;
+    }
+
+    static List<DecisionDraft> drafts(Workspace ws, DecisionRequest r, Long meeting) {
         Catalog catalog = ws.catalog();
         List<String> problems = new ArrayList<>();
         Step step = step(catalog, r.step(), problems);
@@ -76,11 +81,11 @@ public final class Decide {
         Step previous = catalog.previous(step).orElseThrow();
         SortedMap<Period, Quantity> priors = ws.stepValues(r.item(), previous.name(), cycle);
         checkHorizon(r.item(), previous, cycle, periods, priors);
-        return drafts(r, cycle, step, periods, priors, absolute, minutes);
+        return drafts(r, cycle, step, periods, priors, absolute, minutes, meeting);
     }
 
     private static List<DecisionDraft> drafts(DecisionRequest r, Period cycle, Step step, List<Period> periods,
-            SortedMap<Period, Quantity> priors, Quantity absolute, Quantity minutes) {
+            SortedMap<Period, Quantity> priors, Quantity absolute, Quantity minutes, Long meeting) {
         Instant now = Instant.now().truncatedTo(java.time.temporal.ChronoUnit.MILLIS);
         List<DecisionDraft> drafts = new ArrayList<>();
         for (int i = 0; i < periods.size(); i++) {
@@ -88,7 +93,7 @@ public final class Decide {
             Quantity prior = priors.get(p);
             Quantity quantity = r.keep() ? prior : absolute != null ? absolute : scaled(prior, r.percent());
             drafts.add(new DecisionDraft(r.item(), cycle, p, step.name(), prior, quantity, r.keep(), r.reason().strip(),
-                    r.tag(), r.author(), share(minutes, i, periods.size()), now, null));
+                    r.tag(), r.author(), share(minutes, i, periods.size()), now, meeting));
         }
         return drafts;
     }

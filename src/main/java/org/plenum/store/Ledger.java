@@ -56,12 +56,25 @@ public final class Ledger {
 
     /** Every decision, oldest first; only those of {@code cycle} when it is not {@code null}. */
     public List<Decision> entries(Period cycle) {
+        return cycle == null ? query("", null) : query(" WHERE d.cycle = ?", cycle.index());
+    }
+
+    /** The decisions made in a meeting, oldest first. */
+    public List<Decision> ofMeeting(long meeting) {
+        return query(" WHERE d.meeting_id = ?", meeting);
+    }
+
+    /** Every decision on one item, oldest first. */
+    public List<Decision> ofItem(String item) {
+        return query(" WHERE i.item = ?", item);
+    }
+
+    private List<Decision> query(String where, Object parameter) {
         Frequency frequency = workspace.frequency();
         return workspace.read(c -> {
-            String sql = SELECT + (cycle == null ? "" : " WHERE d.cycle = ?") + " ORDER BY d.id";
-            try (PreparedStatement ps = c.prepareStatement(sql)) {
-                if (cycle != null) {
-                    ps.setInt(1, cycle.index());
+            try (PreparedStatement ps = c.prepareStatement(SELECT + where + " ORDER BY d.id")) {
+                if (parameter != null) {
+                    ps.setObject(1, parameter);
                 }
                 List<Decision> out = new ArrayList<>();
                 try (ResultSet rs = ps.executeQuery()) {

@@ -14,7 +14,7 @@ import java.util.List;
  * opens. A database newer than this program is refused rather than guessed at.
  */
 final class Migrations {
-    static final List<String> SCRIPTS = List.of("V1__workspace.sql");
+    static final List<String> SCRIPTS = List.of("V1__workspace.sql", "V2__meetings.sql");
 
     private Migrations() {}
 
