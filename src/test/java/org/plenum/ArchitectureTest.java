@@ -32,10 +32,13 @@ class ArchitectureTest {
                     "java.io", "java.sql", "java.nio.file", "org.sqlite", "picocli", "com.googlecode.lanterna"),
             "store", List.of("org.plenum.io", "org.plenum.app", "org.plenum.cli", "org.plenum.score", "org.plenum.agenda"),
             "io", List.of("org.plenum.app", "org.plenum.cli", "org.plenum.score", "org.plenum.agenda", "java.sql"),
-            "app", List.of("org.plenum.cli", "java.sql"));
+            "app", List.of("org.plenum.cli", "org.plenum.tui", "java.sql"),
+            // Screens compose and display what app returns: no SQL, no store, no files.
+            "tui", List.of("org.plenum.store", "org.plenum.io", "org.plenum.cli", "org.plenum.demo", "java.sql",
+                    "java.nio.file", "org.sqlite", "picocli"));
 
     @ParameterizedTest
-    @ValueSource(strings = {"core", "score", "agenda", "store", "io", "app"})
+    @ValueSource(strings = {"core", "score", "agenda", "store", "io", "app", "tui"})
     void importsOnlyWhatItsLayerMay(String pkg) throws IOException {
         List<String> violations = new ArrayList<>();
         for (Path file : sources(MAIN.resolve(pkg))) {
@@ -50,7 +53,7 @@ class ArchitectureTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"core", "score", "agenda", "io", "app", "cli", "demo"})
+    @ValueSource(strings = {"core", "score", "agenda", "io", "app", "cli", "demo", "tui"})
     void speaksNoSqlOutsideTheStore(String pkg) throws IOException {
         List<String> violations = new ArrayList<>();
         for (Path file : sources(MAIN.resolve(pkg))) {

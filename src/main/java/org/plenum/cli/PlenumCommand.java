@@ -9,7 +9,8 @@ import picocli.CommandLine.Spec;
 /** The root command: only lists the subcommands. */
 @Command(name = "plenum", mixinStandardHelpOptions = true, version = "plenum 0.1.0",
         description = "Runs the demand review meeting and scores every decision against a naive benchmark.",
-        subcommands = {InitCommand.class, ImportCommand.class, AgendaCommand.class, DecideCommand.class, ScoreCommand.class,
+        subcommands = {InitCommand.class, ImportCommand.class, AgendaCommand.class, MeetCommand.class, DecideCommand.class,
+            ScoreCommand.class,
             ExportCommand.class, TagsCommand.class, DemoCommand.class, BenchCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:success", "1:usage error", "2:bad input data (nothing was changed)",
