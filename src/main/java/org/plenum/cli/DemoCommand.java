@@ -19,6 +19,9 @@ final class DemoCommand implements Callable<Integer> {
     @Option(names = "--no-tui", description = "Never open a screen: print what the workspace holds.")
     boolean noTui;
 
+    /** The time box of the demo's meeting, so that its agenda shows a cut line. */
+    static final int DEMO_BUDGET_MINUTES = 60;
+
     @Option(names = "--regenerate", description = "Write demo-data/*.csv afresh from the scenario generator (fixed"
             + " seed) before building.")
     boolean regenerate;
@@ -32,7 +35,7 @@ final class DemoCommand implements Callable<Integer> {
     Path db;
 
     @Override
-    public Integer call() {
+    public Integer call() throws Exception {
         Path home = Path.of(root.env.getOrDefault("PLENUM_HOME", System.getProperty("plenum.home", ".")));
         Path dataDir = data != null ? data : home.resolve("demo-data");
         Path target = db != null ? db : home.resolve("meetings").resolve("demo.db");
@@ -42,7 +45,13 @@ final class DemoCommand implements Callable<Integer> {
         }
         Demo.Built built = Demo.build(root.workspaces, dataDir, target);
         print(built, root.spec.commandLine().getOut());
-        return ExitCodes.OK;
+        if (noTui || System.console() == null) {
+            root.spec.commandLine().getOut().println("The meeting screen: plenum meet --db " + built.db()
+                    + " --budget 60   (needs a terminal; planners join with the same command)");
+            return ExitCodes.OK;
+        }
+        root.spec.commandLine().getOut().flush();
+        return MeetCommand.meet(root, built.db(), null, DEMO_BUDGET_MINUTES, "1-3", false);
     }
 
     static void print(Demo.Built built, PrintWriter out) {
@@ -61,7 +70,8 @@ final class DemoCommand implements Callable<Integer> {
         }
         out.printf("  events     %,d%n", s.events());
         out.printf("  ledger     %,d decisions over %d cycles%n", s.decisions(), s.decidedCycles());
-        out.println("The meeting screen is not built yet. Meanwhile, with --db " + built.db() + ":");
+        out.println("With --db " + built.db() + ":");
+        out.println("  plenum agenda --cycle " + s.lastCycle() + " --budget 60   the ranked agenda");
         out.println("  plenum score --by author        every step and decision against a naive placebo");
         out.println("  plenum decide ... / plenum export ledger");
     }

@@ -46,23 +46,29 @@ final class MeetCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        return meet(root, db.path, cycle, budget, lags, ascii);
+    }
+
+    /** Opens the meeting screen on {@code dbPath} (also the demo's last step). */
+    static int meet(PlenumCommand root, java.nio.file.Path dbPath, String cycle, Integer budget, String lags,
+            boolean ascii) throws Exception {
         int[] lagList = new AgendaOptions().lags(lags);
         if (System.console() == null) {
             throw new UsageException("plenum meet needs an interactive terminal (stdin and stdout a terminal)");
         }
         Look look = Look.fromEnvironment(root.env, ascii);
-        try (Meeting meeting = Meeting.join(root.workspaces, db.path, cycle, budget,
+        try (Meeting meeting = Meeting.join(root.workspaces, dbPath, cycle, budget,
                 Arrays.stream(lagList).boxed().toList(), System.getProperty("user.name"), java.time.Clock.systemUTC());
-                ChangeWatch watch = ChangeWatch.open(root.workspaces, db.path)) {
+                ChangeWatch watch = ChangeWatch.open(root.workspaces, dbPath)) {
             Integer minutes = meeting.info().budgetMinutes();
             AgendaSettings settings = minutes == null ? AgendaSettings.defaults()
                     : AgendaSettings.defaults().withBudget(minutes);
             String cycleText = meeting.cycle().toString();
-            Sources sources = new Sources(() -> Agenda.run(root.workspaces, db.path, cycleText, lagList, settings),
-                    () -> Agenda.guidance(root.workspaces, db.path),
-                    () -> Score.run(root.workspaces, db.path, lagList[0] == 0 && lagList.length > 1 ? lagList[1]
+            Sources sources = new Sources(() -> Agenda.run(root.workspaces, dbPath, cycleText, lagList, settings),
+                    () -> Agenda.guidance(root.workspaces, dbPath),
+                    () -> Score.run(root.workspaces, dbPath, lagList[0] == 0 && lagList.length > 1 ? lagList[1]
                             : lagList[0], Placebo.NAIVE, List.of(), BootstrapInterval.DEFAULT_DRAWS, false),
-                    () -> Meeting.recentActuals(root.workspaces, db.path, meeting.cycle(), 12));
+                    () -> Meeting.recentActuals(root.workspaces, dbPath, meeting.cycle(), 12));
             MeetingTerminal.run(meeting, look, sources, watch::changed);
         }
         return ExitCodes.OK;
