@@ -66,7 +66,7 @@ public final class AgendaRanking {
 
     /** Ranked items first, then those without a stake, then the hands-off ones; ties by item code. */
     private static final Comparator<AgendaRow> ORDER = Comparator.comparingInt(AgendaRanking::tier)
-            .thenComparing(r -> -r.priority().orElse(Double.NEGATIVE_INFINITY))
+            .thenComparingDouble(r -> -r.priority().orElse(Double.NEGATIVE_INFINITY))
             .thenComparing(AgendaRow::code);
 
     private static int tier(AgendaRow r) {
@@ -92,12 +92,7 @@ public final class AgendaRanking {
 
     /** The item's known actuals of the last season before the cycle. */
     private static long[] season(Input in, int item) {
-        long[][] known = in.history().actualsBefore(item, in.cycle());
-        int from = 0;
-        while (from < known[0].length && known[0][from] < in.cycle() - in.seasonLength()) {
-            from++;
-        }
-        return java.util.Arrays.copyOfRange(known[1], from, known[1].length);
+        return in.history().actualsBetween(item, in.cycle() - in.seasonLength(), in.cycle() - 1);
     }
 
     private static Map<String, String> abcClasses(Input in, AgendaSettings settings, List<long[]> seasons) {

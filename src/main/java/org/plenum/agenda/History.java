@@ -19,6 +19,14 @@ public final class History {
             return new Part(stat, new ItemRanges(stat.items(), stat.size()), actuals,
                     new ItemRanges(actuals.items(), actuals.size()));
         }
+
+        int count(int item, int from, int to) {
+            int n = 0;
+            for (int i = actualRanges.from(item); i < actualRanges.to(item); i++) {
+                n += actuals.periods()[i] >= from && actuals.periods()[i] <= to ? 1 : 0;
+            }
+            return n;
+        }
     }
 
     private History(Part window, Part older) {
@@ -71,6 +79,25 @@ public final class History {
             }
         }
         return -1;
+    }
+
+    /** The item's known actuals of periods {@code from..to}, oldest first. */
+    long[] actualsBetween(int item, int from, int to) {
+        int n = 0;
+        for (Part p : new Part[] {older, window}) {
+            n += p.count(item, from, to);
+        }
+        long[] out = new long[n];
+        int k = 0;
+        for (Part p : new Part[] {older, window}) {
+            for (int i = p.actualRanges().from(item); i < p.actualRanges().to(item); i++) {
+                int period = p.actuals().periods()[i];
+                if (period >= from && period <= to) {
+                    out[k++] = p.actuals().quantities()[i];
+                }
+            }
+        }
+        return out;
     }
 
     /** The item's known actuals before {@code cycle}, oldest first, as (periods, quantities). */

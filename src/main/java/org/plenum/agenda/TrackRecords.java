@@ -119,19 +119,17 @@ public final class TrackRecords {
         String group = groups.get(item);
         GroupRecord parent = group == null ? workspace : byGroup.getOrDefault(group, workspace);
         ItemPairs own = byItem.get(item);
-        AvgRelMae.Result ownRatio = own == null ? AvgRelMae.of(List.of()) : AvgRelMae.of(List.of(own.series()));
-        long n = ownRatio.value().isPresent() ? ownRatio.pairsUsed() : 0;
-        double shrunk = CredibilityShrinkage.shrink(n, ownRatio.value().orElse(1), parent.shrunk, k);
-        int ownPairs = own == null ? 0 : own.differences().length;
-        if (ownPairs >= Evidence.MIN_PAIRS) {
-            return new TrackRecord(ownRatio.value(), n, parent.shrunk, shrunk,
-                    evidence(own.differences(), ownRatio.value()), TrackRecord.Pool.ITEM);
+        OptionalDouble ownRatio = own == null ? OptionalDouble.empty() : AvgRelMae.of(List.of(own.series())).value();
+        long n = ownRatio.isPresent() ? own.series().periods() : 0;
+        double shrunk = CredibilityShrinkage.shrink(n, ownRatio.orElse(1), parent.shrunk, k);
+        if (own != null && own.differences().length >= Evidence.MIN_PAIRS) {
+            return new TrackRecord(ownRatio, n, parent.shrunk, shrunk, evidence(own.differences(), ownRatio),
+                    TrackRecord.Pool.ITEM);
         }
         if (parent != workspace && parent.pairs >= Evidence.MIN_PAIRS) {
-            return new TrackRecord(ownRatio.value(), n, parent.shrunk, shrunk, parent.evidence(), TrackRecord.Pool.GROUP);
+            return new TrackRecord(ownRatio, n, parent.shrunk, shrunk, parent.evidence(), TrackRecord.Pool.GROUP);
         }
-        return new TrackRecord(ownRatio.value(), n, parent.shrunk, shrunk, workspace.evidence(),
-                TrackRecord.Pool.WORKSPACE);
+        return new TrackRecord(ownRatio, n, parent.shrunk, shrunk, workspace.evidence(), TrackRecord.Pool.WORKSPACE);
     }
 
     private static Evidence evidence(long[] differences, OptionalDouble ratio) {

@@ -7,6 +7,10 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.Executor;
+import java.util.concurrent.Executors;
 import org.plenum.agenda.AdjustmentGuidance;
 import org.plenum.agenda.AgendaRanking;
 import org.plenum.agenda.AgendaRow;
@@ -21,6 +25,7 @@ import org.plenum.core.CycleSeries;
 import org.plenum.core.Frequency;
 import org.plenum.core.Period;
 import org.plenum.core.ScoredChange;
+import org.plenum.core.Series;
 import org.plenum.core.ValueException;
 import org.plenum.store.AgendaReads;
 import org.plenum.store.Catalog;
@@ -36,7 +41,22 @@ public final class Agenda {
     /** The tag a decision carries when nothing in particular happened: it flags no event. */
     static final String NO_EVENT_TAG = "other";
 
+    /** One reader thread for the whole process; daemon, so it never keeps the JVM alive. */
+    private static final Executor READER = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "plenum-agenda-read");
+        t.setDaemon(true);
+        return t;
+    });
+
     private Agenda() {}
+
+    private static <T> T join(CompletableFuture<T> read) {
+        try {
+            return read.join();
+        } catch (CompletionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : e;
+        }
+    }
 
     /**
      * The ranked agenda.
@@ -58,30 +78,47 @@ public final class Agenda {
             Step stat = catalog.steps().get(0);
             AgendaReads reads = new AgendaReads(ws);
             int c = cycle.index();
-            int maxLag = java.util.Arrays.stream(lags).max().orElseThrow();
-            int windowStart = c - RecentError.CYCLES - maxLag;
+            int windowStart = windowStart(c, lags);
             int actualsStart = Math.min(windowStart, c - catalog.frequency().seasonLength());
-            CycleSeries window = reads.forecastsAround(stat.id(), windowStart, c, lags);
+            // The largest read runs on a second connection while this one reads everything else: two cores.
+            CompletableFuture<CycleSeries> windowRead = CompletableFuture.supplyAsync(() -> {
+                try (Workspace other = workspaces.open(db)) {
+                    return new AgendaReads(other).forecastsAround(stat.id(), windowStart, c, lags);
+                }
+            }, READER);
             List<AgendaReads.ItemRow> items = reads.items();
-            List<Candidate> candidates = candidates(window, items, c, tags(reads, c, lags));
+            Series actuals = reads.actualsBetween(actualsStart, c - 1);
+            Map<Integer, Map<Integer, Set<String>>> tags = tags(reads, c, lags);
+            List<ScoredChange> human = humanValues(reads, catalog, stat, c, lags);
+            ExpectedMinutes minutes = new ExpectedMinutes(settings.defaultMinutes());
+            reads.minutesBefore(c).forEach(m -> minutes.addCycle(m.item(), m.minutesMicros()));
+            CycleSeries window = join(windowRead);
+            List<Candidate> candidates = candidates(window, items, c, tags);
             if (candidates.isEmpty()) {
                 throw noCandidates(reads, cycle, stat, lags);
             }
-            History history = History.of(window, reads.actualsBetween(actualsStart, c - 1));
+            History history = History.of(window, actuals);
             Set<Integer> shortWindows = AgendaRanking.needingOlderHistory(candidates, history, c);
             if (!shortWindows.isEmpty()) {
                 history = history.withOlder(reads.forecastsBefore(stat.id(), shortWindows, windowStart, c, lags),
                         reads.actualsBefore(shortWindows, actualsStart));
             }
             Map<Integer, String> groups = groups(items);
-            TrackRecords records = new TrackRecords(ReviewedPairs.changed(humanValues(reads, catalog, stat, c, lags),
-                    catalog.stepNames()), groups, settings.k());
-            ExpectedMinutes minutes = new ExpectedMinutes(settings.defaultMinutes());
-            reads.minutesBefore(c).forEach(m -> minutes.addCycle(m.item(), m.minutesMicros()));
+            TrackRecords records = new TrackRecords(ReviewedPairs.changed(human, catalog.stepNames()), groups,
+                    settings.k());
             List<AgendaRow> rows = AgendaRanking.rank(new AgendaRanking.Input(c, catalog.frequency().seasonLength(),
                     candidates, history, records, minutes), settings);
             return new Report(cycle, lags.clone(), rows, AgendaRanking.abcByValue(candidates, settings), stat.name());
         }
+    }
+
+    /**
+     * The first cycle of the window read for every item: when nothing is missing, the six latest
+     * cycles with a known error are {@code cycle − 1 − min lag} and the five before it. Items with
+     * gaps have their older rows read apart.
+     */
+    static int windowStart(int cycle, int[] lags) {
+        return cycle - RecentError.CYCLES - java.util.Arrays.stream(lags).min().orElseThrow();
     }
 
     /** The adjustment form's guidance over every standing ledger decision with an actual. */
@@ -117,28 +154,40 @@ public final class Agenda {
     /** Items with statistical forecasts in the cycle, with their target periods and event tags. */
     private static List<Candidate> candidates(CycleSeries window, List<AgendaReads.ItemRow> items, int cycle,
             Map<Integer, Map<Integer, Set<String>>> tags) {
-        Map<Integer, AgendaReads.ItemRow> byId = new HashMap<>();
-        items.forEach(i -> byId.put(i.id(), i));
+        AgendaReads.ItemRow[] byId = new AgendaReads.ItemRow[items.isEmpty() ? 1 : items.get(items.size() - 1).id() + 1];
+        items.forEach(i -> byId[i.id()] = i);
         List<Candidate> out = new ArrayList<>();
         int i = 0;
         while (i < window.size()) {
             int item = window.items()[i];
-            List<Integer> periods = new ArrayList<>();
-            for (; i < window.size() && window.items()[i] == item; i++) {
-                if (window.cycles()[i] == cycle) {
-                    periods.add(window.periods()[i]);
-                }
+            int first = i;
+            while (i < window.size() && window.items()[i] == item) {
+                i++;
             }
-            if (!periods.isEmpty()) {
-                AgendaReads.ItemRow row = byId.get(item);
-                Set<String> itemTags = new TreeSet<>();
-                Map<Integer, Set<String>> byPeriod = tags.getOrDefault(item, Map.of());
-                periods.forEach(p -> itemTags.addAll(byPeriod.getOrDefault(p, Set.of())));
-                out.add(new Candidate(item, row.code(), row.description(), row.group(), row.unitValueMicros(),
-                        periods.stream().mapToInt(Integer::intValue).toArray(), List.copyOf(itemTags)));
+            // The ranked cycle is the latest in the window, so its rows close the item's range.
+            int start = i;
+            while (start > first && window.cycles()[start - 1] == cycle) {
+                start--;
+            }
+            if (start < i) {
+                int[] periods = java.util.Arrays.copyOfRange(window.periods(), start, i);
+                AgendaReads.ItemRow row = byId[item];
+                out.add(new Candidate(item, row.code(), row.description(), row.group(), row.unitValueMicros(), periods,
+                        tagsOf(tags.get(item), periods)));
             }
         }
         return out;
+    }
+
+    private static List<String> tagsOf(Map<Integer, Set<String>> byPeriod, int[] periods) {
+        if (byPeriod == null) {
+            return List.of();
+        }
+        Set<String> out = new TreeSet<>();
+        for (int p : periods) {
+            out.addAll(byPeriod.getOrDefault(p, Set.of()));
+        }
+        return List.copyOf(out);
     }
 
     /** Event tags by item and period in the decision window: imported events and the cycle's decisions. */

@@ -30,22 +30,29 @@ import picocli.CommandLine.ParentCommand;
             "bench import: generate a forecasts CSV, import it with every check on, against the sqlite3 shell's"
                 + " .import of the same file.",
             "bench score: generate a workspace of --rows scored pairs; full scorecard, three breakdowns and the"
-                + " bootstrap, against sqlite3 computing the plain per-step sums."})
+                + " bootstrap, against sqlite3 computing the plain per-step sums.",
+            "bench agenda: generate a workspace of --items items (36 months, 24 cycles of stat forecasts at lags"
+                + " 0-5, a decision per two items); rank the last cycle, against sqlite3 merely reading the same"
+                + " forecast rows."})
 final class BenchCommand implements Callable<Integer> {
     @ParentCommand
     PlenumCommand root;
 
-    @Parameters(index = "0", paramLabel = "WHAT", description = "import or score")
+    @Parameters(index = "0", paramLabel = "WHAT", description = "import, score or agenda")
     String what;
 
     @Option(names = "--rows", defaultValue = "1000000",
             description = "Forecast rows (import) or scored pairs (score); default ${DEFAULT-VALUE}.")
     int rows;
 
+    @Option(names = "--items", defaultValue = "100000",
+            description = "Items of the agenda workspace; default ${DEFAULT-VALUE}.")
+    int items;
+
     @Option(names = "--runs", defaultValue = "5", description = "Runs of each side; medians are reported (default: ${DEFAULT-VALUE}).")
     int runs;
 
-    @Option(names = "--heap", description = "-Xmx of the measured JVM (default: 256m for import, 512m for score).")
+    @Option(names = "--heap", description = "-Xmx of the measured JVM (default: 256m for import, 512m for score and agenda).")
     String heap;
 
     @Option(names = "--run-once", hidden = true, paramLabel = "DIR")
@@ -53,11 +60,14 @@ final class BenchCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException, InterruptedException {
-        if (!what.equals("import") && !what.equals("score")) {
-            throw new UsageException("bench: expected import or score, found \"" + what + "\"");
+        if (!what.equals("import") && !what.equals("score") && !what.equals("agenda")) {
+            throw new UsageException("bench: expected import, score or agenda, found \"" + what + "\"");
         }
         if (heap == null) {
             heap = what.equals("import") ? "256m" : "512m";
+        }
+        if (what.equals("agenda")) {
+            return new AgendaBench(root, runs, items, heap, this::child).run(runOnceDir);
         }
         if (runOnceDir != null && what.equals("score")) {
             Run run = ScoreBenchmark.runOnce(root.workspaces, runOnceDir.resolve("score.db"));
@@ -176,7 +186,7 @@ final class BenchCommand implements Callable<Integer> {
         return run;
     }
 
-    private Run child(List<String> args) throws IOException, InterruptedException {
+    Run child(List<String> args) throws IOException, InterruptedException {
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
         String classpath = System.getProperty("java.class.path");
         // The same JVM options as the plenum launcher, so that a run is timed as users run it.
@@ -194,7 +204,7 @@ final class BenchCommand implements Callable<Integer> {
         return Run.parse(line);
     }
 
-    private static void deleteTree(Path dir) throws IOException {
+    static void deleteTree(Path dir) throws IOException {
         try (Stream<Path> paths = Files.walk(dir)) {
             for (Path p : paths.sorted(Comparator.reverseOrder()).toList()) {
                 Files.deleteIfExists(p);

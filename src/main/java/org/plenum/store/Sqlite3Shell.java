@@ -43,6 +43,11 @@ public final class Sqlite3Shell {
                 + " WHERE f.period - f.cycle = " + lag + " GROUP BY f.step_id;\n");
     }
 
+    /** Reads the forecast rows the agenda reads around a cycle, printing them to nowhere; returns nanoseconds. */
+    public static long agendaForecastRows(Path db, int stepId, int fromCycle, int cycle, int[] lags) {
+        return run(db, AgendaReads.forecastsAroundPlain(stepId, fromCycle, cycle, lags) + ";\n");
+    }
+
     private static long run(Path db, String script) {
         try {
             ProcessBuilder pb = new ProcessBuilder("sqlite3", "-batch", db.toString()).redirectErrorStream(true)
