@@ -71,7 +71,9 @@ final class DemoCommand implements Callable<Integer> {
         out.printf("  events     %,d%n", s.events());
         out.printf("  ledger     %,d decisions over %d cycles%n", s.decisions(), s.decidedCycles());
         out.println("With --db " + built.db() + ":");
-        out.println("  plenum agenda --cycle " + s.lastCycle() + " --budget 60   the ranked agenda");
+        if (s.lastCycle() != null) {
+            out.printf("  plenum agenda --cycle %-9s the cycle's items ranked for the meeting%n", s.lastCycle());
+        }
         out.println("  plenum score --by author        every step and decision against a naive placebo");
         out.println("  plenum decide ... / plenum export ledger");
     }
