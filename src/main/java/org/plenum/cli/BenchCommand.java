@@ -30,12 +30,14 @@ import picocli.CommandLine.ParentCommand;
             "bench import: generate a forecasts CSV, import it with every check on, against the sqlite3 shell's"
                 + " .import of the same file.",
             "bench score: generate a workspace of --rows scored pairs; full scorecard, three breakdowns and the"
-                + " bootstrap, against sqlite3 computing the plain per-step sums."})
+                + " bootstrap, against sqlite3 computing the plain per-step sums.",
+            "bench screen: the meeting screen on a generated --items agenda in Lanterna's virtual terminal: first"
+                + " painted agenda from process start, key-to-repaint latency, peak heap."})
 final class BenchCommand implements Callable<Integer> {
     @ParentCommand
     PlenumCommand root;
 
-    @Parameters(index = "0", paramLabel = "WHAT", description = "import or score")
+    @Parameters(index = "0", paramLabel = "WHAT", description = "import, score or screen")
     String what;
 
     @Option(names = "--rows", defaultValue = "1000000",
@@ -48,13 +50,28 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--heap", description = "-Xmx of the measured JVM (default: 256m for import, 512m for score).")
     String heap;
 
+    @Option(names = "--items", defaultValue = "50000", description = "Agenda items (screen); default ${DEFAULT-VALUE}.")
+    int items;
+
+    @Option(names = "--size", defaultValue = "120x40,80x24",
+            description = "Terminal sizes (screen), COLUMNSxROWS, comma-separated; default ${DEFAULT-VALUE}.")
+    String size;
+
+    @Option(names = "--keep", paramLabel = "DIR",
+            description = "Screen: generate the workspace into DIR and keep it; reuse it when DIR holds one.")
+    Path keep;
+
     @Option(names = "--run-once", hidden = true, paramLabel = "DIR")
     Path runOnceDir;
 
     @Override
     public Integer call() throws IOException, InterruptedException {
+        if (what.equals("screen")) {
+            ScreenBench bench = new ScreenBench(root, items, runs, heap == null ? "512m" : heap, size, keep);
+            return runOnceDir != null ? bench.runOnce(runOnceDir) : bench.report();
+        }
         if (!what.equals("import") && !what.equals("score")) {
-            throw new UsageException("bench: expected import or score, found \"" + what + "\"");
+            throw new UsageException("bench: expected import, score or screen, found \"" + what + "\"");
         }
         if (heap == null) {
             heap = what.equals("import") ? "256m" : "512m";
@@ -177,11 +194,7 @@ final class BenchCommand implements Callable<Integer> {
     }
 
     private Run child(List<String> args) throws IOException, InterruptedException {
-        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-        String classpath = System.getProperty("java.class.path");
-        // The same JVM options as the plenum launcher, so that a run is timed as users run it.
-        List<String> cmd = new ArrayList<>(List.of(java, "-Xmx" + heap, "-XX:+UseParallelGC", "-Djava.awt.headless=true",
-                "-cp", classpath, Main.class.getName()));
+        List<String> cmd = new ArrayList<>(childJvm(heap));
         cmd.addAll(args);
         Process p = new ProcessBuilder(cmd).redirectError(ProcessBuilder.Redirect.INHERIT).start();
         String line;
@@ -194,7 +207,16 @@ final class BenchCommand implements Callable<Integer> {
         return Run.parse(line);
     }
 
-    private static void deleteTree(Path dir) throws IOException {
+    /** The command line of a measured JVM up to its arguments. */
+    static List<String> childJvm(String heap) {
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        String classpath = System.getProperty("java.class.path");
+        // The same JVM options as the plenum launcher, so that a run is timed as users run it.
+        return List.of(java, "-Xmx" + heap, "-XX:+UseParallelGC", "-Djava.awt.headless=true", "-cp", classpath,
+                Main.class.getName());
+    }
+
+    static void deleteTree(Path dir) throws IOException {
         try (Stream<Path> paths = Files.walk(dir)) {
             for (Path p : paths.sorted(Comparator.reverseOrder()).toList()) {
                 Files.deleteIfExists(p);
