@@ -33,21 +33,22 @@ import picocli.CommandLine.ParentCommand;
                 + " bootstrap, against sqlite3 computing the plain per-step sums.",
             "bench agenda: generate a workspace of --items items (36 months, 24 cycles of stat forecasts at lags"
                 + " 0-5, a decision per two items); rank the last cycle, against sqlite3 merely reading the same"
-                + " forecast rows."})
+                + " forecast rows.",
+            "bench screen: the meeting screen on a generated --items agenda in Lanterna's virtual terminal: first"
+                + " painted agenda from process start, key-to-repaint latency, peak heap."})
 final class BenchCommand implements Callable<Integer> {
     @ParentCommand
     PlenumCommand root;
 
-    @Parameters(index = "0", paramLabel = "WHAT", description = "import, score or agenda")
+    @Parameters(index = "0", paramLabel = "WHAT", description = "import, score, agenda or screen")
     String what;
 
     @Option(names = "--rows", defaultValue = "1000000",
             description = "Forecast rows (import) or scored pairs (score); default ${DEFAULT-VALUE}.")
     int rows;
 
-    @Option(names = "--items", defaultValue = "100000",
-            description = "Items of the agenda workspace; default ${DEFAULT-VALUE}.")
-    int items;
+    @Option(names = "--items", description = "Items of the workspace (agenda: default 100000; screen: 50000).")
+    Integer items;
 
     @Option(names = "--runs", defaultValue = "5", description = "Runs of each side; medians are reported (default: ${DEFAULT-VALUE}).")
     int runs;
@@ -55,19 +56,31 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--heap", description = "-Xmx of the measured JVM (default: 256m for import, 512m for score and agenda).")
     String heap;
 
+    @Option(names = "--size", defaultValue = "120x40,80x24",
+            description = "Terminal sizes (screen), COLUMNSxROWS, comma-separated; default ${DEFAULT-VALUE}.")
+    String size;
+
+    @Option(names = "--keep", paramLabel = "DIR",
+            description = "Screen: generate the workspace into DIR and keep it; reuse it when DIR holds one.")
+    Path keep;
+
     @Option(names = "--run-once", hidden = true, paramLabel = "DIR")
     Path runOnceDir;
 
     @Override
     public Integer call() throws IOException, InterruptedException {
+        if (what.equals("screen")) {
+            ScreenBench bench = new ScreenBench(root, items == null ? 50_000 : items, runs, heap == null ? "512m" : heap, size, keep);
+            return runOnceDir != null ? bench.runOnce(runOnceDir) : bench.report();
+        }
         if (!what.equals("import") && !what.equals("score") && !what.equals("agenda")) {
-            throw new UsageException("bench: expected import, score or agenda, found \"" + what + "\"");
+            throw new UsageException("bench: expected import, score, agenda or screen, found \"" + what + "\"");
         }
         if (heap == null) {
             heap = what.equals("import") ? "256m" : "512m";
         }
         if (what.equals("agenda")) {
-            return new AgendaBench(root, runs, items, heap, this::child).run(runOnceDir);
+            return new AgendaBench(root, runs, items == null ? 100_000 : items, heap, this::child).run(runOnceDir);
         }
         if (runOnceDir != null && what.equals("score")) {
             Run run = ScoreBenchmark.runOnce(root.workspaces, runOnceDir.resolve("score.db"));
@@ -187,11 +200,7 @@ final class BenchCommand implements Callable<Integer> {
     }
 
     Run child(List<String> args) throws IOException, InterruptedException {
-        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-        String classpath = System.getProperty("java.class.path");
-        // The same JVM options as the plenum launcher, so that a run is timed as users run it.
-        List<String> cmd = new ArrayList<>(List.of(java, "-Xmx" + heap, "-XX:+UseParallelGC", "-Djava.awt.headless=true",
-                "-cp", classpath, Main.class.getName()));
+        List<String> cmd = new ArrayList<>(childJvm(heap));
         cmd.addAll(args);
         Process p = new ProcessBuilder(cmd).redirectError(ProcessBuilder.Redirect.INHERIT).start();
         String line;
@@ -202,6 +211,15 @@ final class BenchCommand implements Callable<Integer> {
             throw new IllegalStateException("the benchmark run failed (exit " + p.exitValue() + ")");
         }
         return Run.parse(line);
+    }
+
+    /** The command line of a measured JVM up to its arguments. */
+    static List<String> childJvm(String heap) {
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        String classpath = System.getProperty("java.class.path");
+        // The same JVM options as the plenum launcher, so that a run is timed as users run it.
+        return List.of(java, "-Xmx" + heap, "-XX:+UseParallelGC", "-Djava.awt.headless=true", "-cp", classpath,
+                Main.class.getName());
     }
 
     static void deleteTree(Path dir) throws IOException {

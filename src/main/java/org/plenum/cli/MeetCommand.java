@@ -1,5 +1,6 @@
 package org.plenum.cli;
 
+import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -9,6 +10,7 @@ import org.plenum.app.ChangeWatch;
 import org.plenum.app.Meeting;
 import org.plenum.app.Score;
 import org.plenum.app.UsageException;
+import org.plenum.app.Workspaces;
 import org.plenum.score.BootstrapInterval;
 import org.plenum.score.Placebo;
 import org.plenum.tui.Look;
@@ -60,17 +62,21 @@ final class MeetCommand implements Callable<Integer> {
         try (Meeting meeting = Meeting.join(root.workspaces, dbPath, cycle, budget,
                 Arrays.stream(lagList).boxed().toList(), System.getProperty("user.name"), java.time.Clock.systemUTC());
                 ChangeWatch watch = ChangeWatch.open(root.workspaces, dbPath)) {
-            Integer minutes = meeting.info().budgetMinutes();
-            AgendaSettings settings = minutes == null ? AgendaSettings.defaults()
-                    : AgendaSettings.defaults().withBudget(minutes);
-            String cycleText = meeting.cycle().toString();
-            Sources sources = new Sources(() -> Agenda.run(root.workspaces, dbPath, cycleText, lagList, settings),
-                    () -> Agenda.guidance(root.workspaces, dbPath),
-                    () -> Score.run(root.workspaces, dbPath, lagList[0] == 0 && lagList.length > 1 ? lagList[1]
-                            : lagList[0], Placebo.NAIVE, List.of(), BootstrapInterval.DEFAULT_DRAWS, false),
-                    () -> Meeting.recentActuals(root.workspaces, dbPath, meeting.cycle(), 12));
-            MeetingTerminal.run(meeting, look, sources, watch::changed);
+            MeetingTerminal.run(meeting, look, sources(root.workspaces, dbPath, meeting, lagList), watch::changed);
         }
         return ExitCodes.OK;
+    }
+
+    /** The screen's slow reads, each opening its own connection when it runs (also what {@code bench screen} uses). */
+    static Sources sources(Workspaces workspaces, Path db, Meeting meeting, int[] lagList) {
+        Integer minutes = meeting.info().budgetMinutes();
+        AgendaSettings settings = minutes == null ? AgendaSettings.defaults()
+                : AgendaSettings.defaults().withBudget(minutes);
+        String cycleText = meeting.cycle().toString();
+        return new Sources(() -> Agenda.run(workspaces, db, cycleText, lagList, settings),
+                () -> Agenda.guidance(workspaces, db),
+                () -> Score.run(workspaces, db, lagList[0] == 0 && lagList.length > 1 ? lagList[1]
+                        : lagList[0], Placebo.NAIVE, List.of(), BootstrapInterval.DEFAULT_DRAWS, false),
+                () -> Meeting.recentActuals(workspaces, db, meeting.cycle(), 12));
     }
 }

@@ -63,6 +63,19 @@ public final class MeetingScreen {
         draw();
     }
 
+    /**
+     * Waits up to {@code wait} for a posted task (a background read arriving), then does what
+     * {@link #step()} does: for a driver on its own thread that must not spin while the agenda is
+     * ranked, as the production loop blocks on its queue.
+     */
+    public void step(Duration wait) throws InterruptedException {
+        Runnable task = tasks.poll(wait.toNanos(), java.util.concurrent.TimeUnit.NANOSECONDS);
+        if (task != null) {
+            task.run();
+        }
+        step();
+    }
+
     /** Posts a task for the UI thread (from the input, watcher and clock threads). */
     public void post(Runnable task) {
         tasks.add(task);

@@ -38,7 +38,7 @@ public final class MeetingTerminal {
             unix.getInputDecoder().setTimeoutUnits(1);
         }
         TerminalScreen screen = new TerminalScreen(terminal);
-        ExecutorService background = Executors.newFixedThreadPool(2, daemon("plenum-meet-work"));
+        ExecutorService background = background();
         AtomicBoolean gone = new AtomicBoolean();
         screen.startScreen();
         try {
@@ -68,6 +68,11 @@ public final class MeetingTerminal {
             background.shutdownNow();
             screen.stopScreen();
         }
+    }
+
+    /** The screen's workers for its slow reads: two daemon threads (also what {@code bench screen} runs on). */
+    public static ExecutorService background() {
+        return Executors.newFixedThreadPool(2, daemon("plenum-meet-work"));
     }
 
     private static void readKeys(TerminalScreen screen, MeetingScreen meet, AtomicBoolean gone) {
