@@ -70,7 +70,7 @@ final class ScorecardView implements View {
             return "-";
         }
         double b = v.getAsDouble();
-        return b == 0 ? "none" : String.format(Locale.ROOT, "%.1f%% %s", 100 * Math.abs(b), b > 0 ? "over" : "under");
+        return b == 0 ? "none" : String.format(Locale.ROOT, "%.1f%% %s", 100 * Math.abs(b), b > 0 ? "above" : "below");
     }
 
     private static String p(OptionalDouble p) {
