@@ -72,12 +72,14 @@ public final class Score {
             checkFields(by, fields(reads));
             List<Series> read = ParallelReads.of(workspaces, db, catalog.stepNames(), catalog.ledgerStep(), lag);
             PairedSet set = pairedSet(read, catalog, lag, placebo);
+            Series actuals = read.get(0);
+            read = null; // the steps' series are in the set now: a million rows each the heap need not keep
             BootstrapInterval bootstrap = BootstrapInterval.withDefaults().withDraws(draws);
             PairErrors errors = PairErrors.of(set);
             Scorecard all = Scorecard.of(errors, placebo, bootstrap);
             LensReads lensReads = new LensReads(ws);
             List<ScoredChange> decisions = withLens ? lensReads.decisions() : List.of();
-            DecisionLens lens = withLens ? new DecisionLens(read.get(0)) : null;
+            DecisionLens lens = withLens ? new DecisionLens(actuals) : null;
             List<Breakdown> breakdowns = new ArrayList<>();
             for (String field : by) {
                 breakdowns.add(new Breakdown(field, DECISION_FIELDS.contains(field) ? Map.of()

@@ -61,7 +61,7 @@ final class BenchCommand implements Callable<Integer> {
     String size;
 
     @Option(names = "--keep", paramLabel = "DIR",
-            description = "Screen: generate the workspace into DIR and keep it; reuse it when DIR holds one.")
+            description = "Score and screen: generate the workspace into DIR and keep it; reuse it when DIR holds one.")
     Path keep;
 
     @Option(names = "--run-once", hidden = true, paramLabel = "DIR")
@@ -149,10 +149,14 @@ final class BenchCommand implements Callable<Integer> {
 
     private int benchScore() throws IOException, InterruptedException {
         PrintWriter out = root.spec.commandLine().getOut();
-        Path dir = Files.createTempDirectory("plenum-bench-score-");
+        Path dir = keep != null ? Files.createDirectories(keep) : Files.createTempDirectory("plenum-bench-score-");
         try {
-            out.printf(Locale.ROOT, "generating a workspace of %,d scored pairs in %s%n", rows, dir);
-            ScoreBenchmark.generate(root.workspaces, dir, dir.resolve("score.db"), rows);
+            if (Files.exists(dir.resolve("score.db"))) {
+                out.printf(Locale.ROOT, "reusing the workspace in %s%n", dir);
+            } else {
+                out.printf(Locale.ROOT, "generating a workspace of %,d scored pairs in %s%n", rows, dir);
+                ScoreBenchmark.generate(root.workspaces, dir, dir.resolve("score.db"), rows);
+            }
             boolean reference = ImportBenchmark.sqlite3Installed();
             long[] ours = new long[runs];
             long[] theirs = new long[runs];
@@ -184,7 +188,9 @@ final class BenchCommand implements Callable<Integer> {
                 out.println("sqlite3 is not installed: no reference time (apt-get install sqlite3)");
             }
         } finally {
-            deleteTree(dir);
+            if (keep == null) {
+                deleteTree(dir);
+            }
         }
         return ExitCodes.OK;
     }

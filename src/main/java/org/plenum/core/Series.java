@@ -26,6 +26,33 @@ public record Series(int[] items, int[] periods, long[] quantities, int size) {
             quantities[size++] = quantity;
         }
 
+        public int size() {
+            return size;
+        }
+
+        /** The period of the row added last; there must be one. */
+        public int lastPeriod() {
+            return periods[size - 1];
+        }
+
+        /**
+         * Sorts the rows from {@code from} on by period: they must all be of one item. For reads
+         * whose order SQL does not promise (a group_concat keeps the scan order, usually sorted).
+         */
+        public void sortFrom(int from) {
+            Integer[] order = new Integer[size - from];
+            for (int i = 0; i < order.length; i++) {
+                order[i] = from + i;
+            }
+            Arrays.sort(order, (a, b) -> Integer.compare(periods[a], periods[b]));
+            int[] p = Arrays.copyOfRange(periods, from, size);
+            long[] q = Arrays.copyOfRange(quantities, from, size);
+            for (int i = 0; i < order.length; i++) {
+                periods[from + i] = p[order[i] - from];
+                quantities[from + i] = q[order[i] - from];
+            }
+        }
+
         public Series build() {
             return new Series(items, periods, quantities, size);
         }

@@ -124,7 +124,13 @@ public record PairedSet(List<String> sources, int lag, int[] items, int[] period
 
         PairedSet build(List<String> sources, int lag) {
             Series out = leftOut.build();
-            return new PairedSet(sources, lag, items, periods, actuals, forecasts, scales, size,
+            // Columns of exactly the set's size: a scorecard over all pairs then reads them as they are.
+            long[][] trimmed = new long[forecasts.length][];
+            for (int s = 0; s < forecasts.length; s++) {
+                trimmed[s] = Arrays.copyOf(forecasts[s], size);
+            }
+            return new PairedSet(sources, lag, Arrays.copyOf(items, size), Arrays.copyOf(periods, size),
+                    Arrays.copyOf(actuals, size), trimmed, Arrays.copyOf(scales, size), size,
                     Arrays.copyOf(out.items(), out.size()), Arrays.copyOf(out.periods(), out.size()));
         }
     }

@@ -142,7 +142,11 @@ public record Scorecard(int lag, Placebo placebo, int pairs, int leftOut, List<S
         return rows;
     }
 
+    /** The column's values at {@code rows}; the column itself when the rows are all of it (nothing writes to either). */
     private static long[] pick(long[] column, int[] rows) {
+        if (rows.length == column.length) {
+            return column;
+        }
         long[] out = new long[rows.length];
         for (int i = 0; i < rows.length; i++) {
             out[i] = column[rows[i]];
@@ -151,6 +155,9 @@ public record Scorecard(int lag, Placebo placebo, int pairs, int leftOut, List<S
     }
 
     private static double[] pick(double[] column, int[] rows) {
+        if (rows.length == column.length) {
+            return column;
+        }
         double[] out = new double[rows.length];
         for (int i = 0; i < rows.length; i++) {
             out[i] = column[rows[i]];

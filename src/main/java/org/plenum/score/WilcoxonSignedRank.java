@@ -216,21 +216,56 @@ public final class WilcoxonSignedRank {
          */
         private final int[] signedRankBySize;
 
-        /** @param sizeRank dense rank of |d| among the distinct non-zero sizes; −1 where d is zero */
-        private Ranking(long[] differences, int[] sizeRank, int[] bySize) {
+        private Ranking(long[] differences, int[] bySize, int[] signedRankBySize) {
             this.differences = differences;
             this.bySize = bySize;
-            this.signedRankBySize = new int[bySize.length];
-            for (int p = 0; p < bySize.length; p++) {
-                signedRankBySize[p] = 2 * sizeRank[bySize[p]] + (differences[bySize[p]] > 0 ? 1 : 0);
-            }
+            this.signedRankBySize = signedRankBySize;
         }
 
+        /**
+         * Sorts the non-zero differences by size once. Each is packed with its index into one
+         * long, {@code |d| << indexBits | index}, when the largest size leaves room: one primitive
+         * sort then yields the order, equal sizes in index order, with no lookups; otherwise the
+         * sizes are sorted and each difference finds its rank by binary search.
+         */
         static Ranking of(long[] differences) {
             int nonZero = 0;
+            long largest = 0;
             for (long d : differences) {
                 nonZero += d != 0 ? 1 : 0;
+                largest = Math.max(largest, Math.absExact(d));
             }
+            int indexBits = Math.max(1, 64 - Long.numberOfLeadingZeros(differences.length));
+            return largest < 1L << (63 - indexBits) ? packed(differences, nonZero, indexBits)
+                    : searched(differences, nonZero);
+        }
+
+        private static Ranking packed(long[] differences, int nonZero, int indexBits) {
+            long[] keys = new long[nonZero];
+            int k = 0;
+            for (int i = 0; i < differences.length; i++) {
+                if (differences[i] != 0) {
+                    keys[k++] = Math.abs(differences[i]) << indexBits | i;
+                }
+            }
+            Arrays.sort(keys);
+            long mask = (1L << indexBits) - 1;
+            int[] bySize = new int[nonZero];
+            int[] signedRanks = new int[nonZero];
+            int rank = -1;
+            long previousSize = -1;
+            for (int p = 0; p < nonZero; p++) {
+                int i = (int) (keys[p] & mask);
+                long size = keys[p] >>> indexBits;
+                rank += size != previousSize ? 1 : 0;
+                previousSize = size;
+                bySize[p] = i;
+                signedRanks[p] = 2 * rank + (differences[i] > 0 ? 1 : 0);
+            }
+            return new Ranking(differences, bySize, signedRanks);
+        }
+
+        private static Ranking searched(long[] differences, int nonZero) {
             long[] sizes = new long[nonZero];
             int k = 0;
             for (long d : differences) {
@@ -263,7 +298,11 @@ public final class WilcoxonSignedRank {
                     bySize[firstOfRank[sizeRank[i]]++] = i;
                 }
             }
-            return new Ranking(differences, sizeRank, bySize);
+            int[] signedRanks = new int[nonZero];
+            for (int p = 0; p < nonZero; p++) {
+                signedRanks[p] = 2 * sizeRank[bySize[p]] + (differences[bySize[p]] > 0 ? 1 : 0);
+            }
+            return new Ranking(differences, bySize, signedRanks);
         }
 
         public int size() {

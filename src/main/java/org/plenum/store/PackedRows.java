@@ -1,61 +1,52 @@
 package org.plenum.store;
 
+import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
 import org.plenum.core.Series;
 
-/** Reads one item's {@code period,quantity;period,quantity;...} text back into sorted columns. */
+/**
+ * Reads one item's {@code period,quantity;period,quantity;...} text back into sorted columns. The
+ * text is read as the bytes SQLite gives (ASCII digits, signs and separators), so that a million
+ * values are never decoded into strings.
+ */
 final class PackedRows {
     private PackedRows() {}
 
     static void parse(int item, String text, Series.Builder out) {
-        int n = 1;
-        for (int i = 0; i < text.length(); i++) {
-            n += text.charAt(i) == ';' ? 1 : 0;
-        }
-        int[] periods = new int[n];
-        long[] quantities = new long[n];
+        parse(item, text.getBytes(StandardCharsets.US_ASCII), out);
+    }
+
+    static void parse(int item, byte[] text, Series.Builder out) {
+        int first = out.size();
         int pos = 0;
-        for (int k = 0; k < n; k++) {
-            int comma = text.indexOf(',', pos);
-            int end = text.indexOf(';', comma);
-            if (end < 0) {
-                end = text.length();
-            }
-            periods[k] = (int) number(text, pos, comma);
-            quantities[k] = number(text, comma + 1, end);
+        boolean sorted = true;
+        while (pos < text.length) {
+            int comma = indexOf(text, (byte) ',', pos);
+            int end = indexOf(text, (byte) ';', comma);
+            int period = (int) number(text, pos, comma);
+            sorted &= out.size() == first || out.lastPeriod() < period;
+            out.add(item, period, number(text, comma + 1, end));
             pos = end + 1;
         }
-        sortByPeriod(periods, quantities);
-        for (int k = 0; k < n; k++) {
-            out.add(item, periods[k], quantities[k]);
+        if (!sorted) {
+            out.sortFrom(first);
         }
     }
 
-    /** group_concat keeps the scan order, which SQL does not promise; a sort makes sure. */
-    private static void sortByPeriod(int[] periods, long[] quantities) {
-        for (int k = 1; k < periods.length; k++) {
-            if (periods[k - 1] > periods[k]) {
-                Integer[] order = new Integer[periods.length];
-                for (int i = 0; i < order.length; i++) {
-                    order[i] = i;
-                }
-                Arrays.sort(order, (a, b) -> Integer.compare(periods[a], periods[b]));
-                int[] p = periods.clone();
-                long[] q = quantities.clone();
-                for (int i = 0; i < order.length; i++) {
-                    periods[i] = p[order[i]];
-                    quantities[i] = q[order[i]];
-                }
-                return;
+    private static int indexOf(byte[] text, byte b, int from) {
+        for (int i = from; i < text.length; i++) {
+            if (text[i] == b) {
+                return i;
             }
         }
+        return text.length;
     }
 
-    private static long number(String s, int from, int to) {
-        boolean negative = s.charAt(from) == '-';
+    private static long number(byte[] s, int from, int to) {
+        boolean negative = s[from] == '-';
         long v = 0;
         for (int i = negative ? from + 1 : from; i < to; i++) {
-            v = v * 10 + (s.charAt(i) - '0');
+            v = v * 10 + (s[i] - '0');
         }
         return negative ? -v : v;
     }

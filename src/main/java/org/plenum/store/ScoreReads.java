@@ -143,7 +143,7 @@ public final class ScoreReads {
             Series.Builder b = new Series.Builder();
             try (PreparedStatement ps = c.prepareStatement(sql); ResultSet rs = ps.executeQuery()) {
                 while (rs.next()) {
-                    PackedRows.parse(rs.getInt(1), rs.getString(2), b);
+                    PackedRows.parse(rs.getInt(1), rs.getBytes(2), b);
                 }
             }
             return b.build();

@@ -63,6 +63,29 @@ class WilcoxonGroupedTest {
         }
     }
 
+    /**
+     * Ranks depend only on the order of sizes, so scaling every difference by one positive factor
+     * gives the same test. A factor that pushes the largest size past what the packed sort can
+     * hold makes the ranking take its other path: both must agree.
+     */
+    @Test
+    void hugeDifferencesRankAsSmallOnesDo() {
+        SplittableRandom random = new SplittableRandom(13);
+        int n = 4000;
+        long[] d = new long[n];
+        int[] group = new int[n];
+        for (int i = 0; i < n; i++) {
+            d[i] = (random.nextInt(41) - 20) * 1_000_000L;
+            group[i] = i % 4;
+        }
+        long factor = (1L << 60) / 20_000_000L;
+        long[] huge = Arrays.stream(d).map(x -> x * factor).toArray();
+        WilcoxonSignedRank test = WilcoxonSignedRank.twoSided();
+        assertEquals(Arrays.asList(test.test(test.rank(d), group, 4)),
+                Arrays.asList(test.test(test.rank(huge), group, 4)));
+        assertEquals(test.test(d), test.test(huge));
+    }
+
     @Test
     void labelsMustCoverTheSample() {
         WilcoxonSignedRank test = WilcoxonSignedRank.twoSided();
