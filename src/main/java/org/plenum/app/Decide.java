@@ -49,17 +49,20 @@ public final class Decide {
     }
 
     static List<DecisionDraft> drafts(Workspace ws, DecisionRequest r, Long meeting) {
-        Catalog catalog = ws.catalog();
+        // Steps, the one item and the tags only: the whole catalog lists every item, which a
+        // meeting's save must not wait for.
+        Catalog catalog = ws.processSteps();
         List<String> problems = new ArrayList<>();
         Step step = step(catalog, r.step(), problems);
-        if (!catalog.items().containsKey(r.item())) {
+        if (!ws.hasItem(r.item())) {
             problems.add("item: expected an item of the workspace, found \"" + r.item() + "\"");
         }
         if (r.reason() == null || r.reason().isBlank()) {
             problems.add("--reason: expected a few words saying why, found an empty reason");
         }
-        if (!catalog.tags().contains(r.tag())) {
-            problems.add("--tag: expected one of " + String.join(", ", catalog.tags()) + ", found \"" + r.tag() + "\"");
+        java.util.Set<String> tags = ws.tags();
+        if (!tags.contains(r.tag())) {
+            problems.add("--tag: expected one of " + String.join(", ", tags) + ", found \"" + r.tag() + "\"");
         }
         Quantity minutes = optionalQuantity("--minutes", r.minutes(), problems);
         Quantity absolute = optionalQuantity("--qty", r.quantity(), problems);

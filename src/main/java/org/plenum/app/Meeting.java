@@ -303,7 +303,7 @@ public final class Meeting implements AutoCloseable {
 
     /** The event tags the workspace knows, for the form's pick list. */
     public List<String> tags() {
-        return workspace.catalog().tags().stream().sorted().toList();
+        return workspace.tags().stream().sorted().toList();
     }
 
     public ItemDetail item(String code) {

@@ -14,7 +14,8 @@ import java.util.List;
  * opens. A database newer than this program is refused rather than guessed at.
  */
 final class Migrations {
-    static final List<String> SCRIPTS = List.of("V1__workspace.sql", "V2__meetings.sql");
+    static final List<String> SCRIPTS = List.of("V1__workspace.sql", "V2__meetings.sql",
+            "V3__decisions_by_meeting.sql");
 
     private Migrations() {}
 

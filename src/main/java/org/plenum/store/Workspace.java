@@ -120,6 +120,23 @@ public final class Workspace implements AutoCloseable {
         return read(c -> Catalogs.of(c, true));
     }
 
+    /** The event tags, built-in first: what a decision's tag must be one of. */
+    public java.util.Set<String> tags() {
+        return read(Catalogs::tags);
+    }
+
+    /** Whether the workspace holds the item {@code code}. */
+    public boolean hasItem(String code) {
+        return read(c -> {
+            try (java.sql.PreparedStatement ps = c.prepareStatement("SELECT 1 FROM items WHERE item = ?")) {
+                ps.setString(1, code);
+                try (java.sql.ResultSet rs = ps.executeQuery()) {
+                    return rs.next();
+                }
+            }
+        });
+    }
+
     /**
      * The catalog without its items and tags: enough to find steps, and cheap on a workspace of
      * a hundred thousand items.
@@ -157,7 +174,7 @@ public final class Workspace implements AutoCloseable {
      * nobody decided.
      */
     public java.util.SortedMap<Period, Quantity> stepValues(String item, String step, Period cycle) {
-        return read(c -> StepValues.of(c, catalog(), item, step, cycle));
+        return read(c -> StepValues.of(c, Catalogs.of(c, false), item, step, cycle));
     }
 
     /** Counts of what the workspace holds, for the summary a user sees after building it. */

@@ -21,6 +21,13 @@ final class AgendaView implements View {
     private int selected;
     private int first;
     private List<AgendaRow> shown = List.of();
+    /** The agenda and the filter {@code shown} was worked out from. */
+    private List<AgendaRow> filtered;
+    private String filteredBy;
+    /** The index in {@code shown} before which the cut line is drawn; −1 for none. */
+    private int cut = -1;
+    private long aboveCut;
+    private long handsOff;
     private int page = 10;
 
     AgendaView(Room room) {
@@ -42,16 +49,42 @@ final class AgendaView implements View {
         refilter();
     }
 
+    /**
+     * The rows the filter lets through, worked out again only when the agenda or the filter
+     * changed: a key must not walk fifty thousand rows to move the selection by one.
+     */
     private void refilter() {
-        String needle = filter.toLowerCase(Locale.ROOT);
-        List<AgendaRow> out = new ArrayList<>();
-        for (AgendaRow r : room.agendaRows()) {
-            if (needle.isEmpty() || matches(r, needle)) {
-                out.add(r);
+        List<AgendaRow> all = room.agendaRows();
+        if (all != filtered || !filter.equals(filteredBy)) {
+            String needle = filter.toLowerCase(Locale.ROOT);
+            List<AgendaRow> out = needle.isEmpty() ? all : new ArrayList<>();
+            if (!needle.isEmpty()) {
+                for (AgendaRow r : all) {
+                    if (matches(r, needle)) {
+                        out.add(r);
+                    }
+                }
+            }
+            if (all != filtered) {
+                aboveCut = all.stream().filter(r -> r.aboveCut().orElse(false)).count();
+                handsOff = all.stream().filter(AgendaRow::handsOff).count();
+            }
+            shown = out;
+            cut = firstBelowCut(out);
+            filtered = all;
+            filteredBy = filter;
+        }
+        selected = Math.max(0, Math.min(selected, shown.size() - 1));
+    }
+
+    /** The index of the first shown row below the cut line, −1 when none is. */
+    private static int firstBelowCut(List<AgendaRow> rows) {
+        for (int i = 0; i < rows.size(); i++) {
+            if (rows.get(i).aboveCut().isPresent() && !rows.get(i).aboveCut().get()) {
+                return i;
             }
         }
-        shown = out;
-        selected = Math.max(0, Math.min(selected, shown.size() - 1));
+        return -1;
     }
 
     private static boolean matches(AgendaRow r, String needle) {
@@ -131,10 +164,8 @@ final class AgendaView implements View {
             return;
         }
         List<AgendaRow> all = room.agendaRows();
-        long above = all.stream().filter(r -> r.aboveCut().orElse(false)).count();
-        long handsOff = all.stream().filter(AgendaRow::handsOff).count();
         String budget = room.state.meeting().budgetMinutes() == null ? "no time budget"
-                : above + " above the cut (" + room.state.meeting().budgetMinutes() + " min)";
+                : aboveCut + " above the cut (" + room.state.meeting().budgetMinutes() + " min)";
         body.text(0, 0, String.format(Locale.ROOT, "%,d items  %s  %d hands off%s", all.size(), budget, handsOff,
                 typingFilter || !filter.isEmpty() ? "  filter: " + filter + (typingFilter ? "_" : "") : ""),
                 Look.Role.TITLE);
@@ -142,24 +173,26 @@ final class AgendaView implements View {
         body.text(0, 1, columns.header(), Look.Role.DIM);
         int rows = body.rows() - 2;
         page = Math.max(1, rows - 1);
-        List<Line> lines = lines();
-        int selectedLine = lineOf(lines, selected);
+        int lines = shown.size() + (cut >= 0 ? 1 : 0);
+        int selectedLine = shown.isEmpty() ? 0 : lineOf(selected);
         if (selectedLine < first) {
             first = selectedLine;
         } else if (selectedLine >= first + rows) {
             first = selectedLine - rows + 1;
         }
-        first = Math.max(0, Math.min(first, Math.max(0, lines.size() - rows)));
-        for (int i = 0; i < rows && first + i < lines.size(); i++) {
-            Line line = lines.get(first + i);
-            if (line.row == null) {
-                body.text(0, 2 + i, line.text, Look.Role.WARN);
+        first = Math.max(0, Math.min(first, Math.max(0, lines - rows)));
+        for (int i = 0; i < rows && first + i < lines; i++) {
+            int line = first + i;
+            if (line == cut) {
+                String rule = String.valueOf(room.look.rule()).repeat(4);
+                body.text(0, 2 + i, rule + " cut line: the " + room.state.meeting().budgetMinutes()
+                        + "-minute budget runs out here " + rule, Look.Role.WARN);
             } else {
-                boolean isSelected = line.index == selected;
-                Look.Role role = isSelected ? Look.Role.SELECTED : line.row.handsOff() ? Look.Role.WARN
-                        : line.row.aboveCut().map(a -> a ? Look.Role.PLAIN : Look.Role.DIM).orElse(Look.Role.PLAIN);
-                body.line(2 + i, columns.row(line.row, status(line.row), room.look, room.sparkline(line.row.code())),
-                        role);
+                int index = cut >= 0 && line > cut ? line - 1 : line;
+                AgendaRow row = shown.get(index);
+                Look.Role role = index == selected ? Look.Role.SELECTED : row.handsOff() ? Look.Role.WARN
+                        : row.aboveCut().map(a -> a ? Look.Role.PLAIN : Look.Role.DIM).orElse(Look.Role.PLAIN);
+                body.line(2 + i, columns.row(row, status(row), room.look, room.sparkline(row.code())), role);
             }
         }
         if (shown.isEmpty()) {
@@ -180,32 +213,9 @@ final class AgendaView implements View {
         return status.word();
     }
 
-    /** A row of the list: an agenda row, or the cut line (row null). */
-    private record Line(AgendaRow row, int index, String text) {}
-
-    private List<Line> lines() {
-        List<Line> out = new ArrayList<>();
-        boolean cutDrawn = false;
-        for (int i = 0; i < shown.size(); i++) {
-            AgendaRow r = shown.get(i);
-            if (!cutDrawn && r.aboveCut().isPresent() && !r.aboveCut().get()) {
-                cutDrawn = true;
-                String rule = String.valueOf(room.look.rule()).repeat(4);
-                out.add(new Line(null, -1, rule + " cut line: the " + room.state.meeting().budgetMinutes()
-                        + "-minute budget runs out here " + rule));
-            }
-            out.add(new Line(r, i, ""));
-        }
-        return out;
-    }
-
-    private static int lineOf(List<Line> lines, int index) {
-        for (int i = 0; i < lines.size(); i++) {
-            if (lines.get(i).index == index) {
-                return i;
-            }
-        }
-        return 0;
+    /** The list line of shown row {@code index}: one further down from the cut line on. */
+    private int lineOf(int index) {
+        return cut >= 0 && index >= cut ? index + 1 : index;
     }
 
     @Override
