@@ -34,8 +34,9 @@ import picocli.CommandLine.ParentCommand;
             "bench agenda: generate a workspace of --items items (36 months, 24 cycles of stat forecasts at lags"
                 + " 0-5, a decision per two items); rank the last cycle, against sqlite3 merely reading the same"
                 + " forecast rows.",
-            "bench screen: the meeting screen on a generated --items agenda in Lanterna's virtual terminal: first"
-                + " painted agenda from process start, key-to-repaint latency, peak heap."})
+            "bench screen: the meeting screen on a generated --items agenda in Lanterna's virtual terminal, as the"
+                + " screen that opens a new meeting (ranks the agenda) and as one that joins it (reads the agenda kept"
+                + " with the meeting): first painted agenda from process start, key-to-repaint latency, peak heap."})
 final class BenchCommand implements Callable<Integer> {
     @ParentCommand
     PlenumCommand root;

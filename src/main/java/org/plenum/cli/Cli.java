@@ -1,6 +1,7 @@
 package org.plenum.cli;
 
 import java.io.PrintWriter;
+import java.util.List;
 import java.util.Map;
 import org.plenum.app.UsageException;
 import org.plenum.core.BadInputException;
@@ -12,8 +13,22 @@ import picocli.CommandLine;
 public final class Cli {
     private Cli() {}
 
+    /** The command line with every subcommand. */
     public static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env) {
+        return create(out, err, env, new String[0]);
+    }
+
+    /**
+     * The command line for {@code args}: when they start with a subcommand's name, with that
+     * subcommand only. picocli reads every option of every subcommand it is given, by
+     * reflection, which is most of a command's start; help and mistakes still get them all.
+     */
+    public static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, String[] args) {
         CommandLine cl = new CommandLine(new PlenumCommand(env));
+        List<Class<?>> named = PlenumCommand.SUBCOMMANDS.stream()
+                .filter(c -> args.length > 0 && c.getAnnotation(CommandLine.Command.class).name().equals(args[0]))
+                .toList();
+        (named.isEmpty() ? PlenumCommand.SUBCOMMANDS : named).forEach(cl::addSubcommand);
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);

@@ -13,13 +13,32 @@ public final class Main {
     private Main() {}
 
     public static void main(String[] args) {
-        useCacheForNativeLibrary();
+        // The driver's native library is found and loaded while picocli reads the commands: both
+        // take about a tenth of a second, and there are two cores.
+        Thread sqlite = new Thread(Main::loadSqlite, "plenum-sqlite-load");
+        sqlite.setDaemon(true);
+        sqlite.start();
         PrintWriter out = new PrintWriter(System.out, true, StandardCharsets.UTF_8);
         PrintWriter err = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
-        int code = Cli.create(out, err, System.getenv()).execute(args);
+        picocli.CommandLine cli = Cli.create(out, err, System.getenv(), args);
+        try {
+            sqlite.join();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        int code = cli.execute(args);
         out.flush();
         err.flush();
         System.exit(code);
+    }
+
+    private static void loadSqlite() {
+        useCacheForNativeLibrary();
+        try {
+            org.sqlite.SQLiteJDBCLoader.initialize();
+        } catch (Exception | LinkageError e) {
+            // The first connection tries again and reports what is wrong.
+        }
     }
 
     /**

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.plenum.agenda.AgendaSettings;
 import org.plenum.app.Agenda;
+import org.plenum.app.MeetingAgenda;
 import org.plenum.app.ChangeWatch;
 import org.plenum.app.Meeting;
 import org.plenum.app.Score;
@@ -72,8 +73,9 @@ final class MeetCommand implements Callable<Integer> {
         Integer minutes = meeting.info().budgetMinutes();
         AgendaSettings settings = minutes == null ? AgendaSettings.defaults()
                 : AgendaSettings.defaults().withBudget(minutes);
-        String cycleText = meeting.cycle().toString();
-        return new Sources(() -> Agenda.run(workspaces, db, cycleText, lagList, settings),
+        long id = meeting.info().id();
+        return new Sources(() -> MeetingAgenda.of(workspaces, db, id, meeting.cycle(), lagList, settings,
+                java.time.Clock.systemUTC()),
                 () -> Agenda.guidance(workspaces, db),
                 () -> Score.run(workspaces, db, lagList[0] == 0 && lagList.length > 1 ? lagList[1]
                         : lagList[0], Placebo.NAIVE, List.of(), BootstrapInterval.DEFAULT_DRAWS, false),

@@ -104,7 +104,9 @@ final class ScreenBench {
                         (System.nanoTime() - t0) / 1e9);
             }
             for (int[] size : sizes) {
-                reportSize(out, db, size);
+                for (Mode mode : Mode.values()) {
+                    reportSize(out, db, size, mode);
+                }
             }
         } finally {
             if (keep == null) {
@@ -114,12 +116,31 @@ final class ScreenBench {
         return ExitCodes.OK;
     }
 
-    private void reportSize(PrintWriter out, Path db, int[] size) throws IOException, InterruptedException {
+    /**
+     * How the measured screen meets its meeting: the first screen of a new meeting ranks the
+     * cycle and keeps the agenda with the meeting; a screen joining an open meeting (a planner, or
+     * anyone coming back) reads the kept agenda.
+     */
+    enum Mode {
+        OPEN("opens a new meeting: ranks the agenda"), JOIN("joins the open meeting: reads its kept agenda");
+
+        final String text;
+
+        Mode(String text) {
+            this.text = text;
+        }
+    }
+
+    private void reportSize(PrintWriter out, Path db, int[] size, Mode mode) throws IOException, InterruptedException {
         String sizeText = size[0] + "x" + size[1];
+        out.printf(Locale.ROOT, "%s, the screen %s%n", sizeText, mode.text);
         List<ScreenRun> done = new ArrayList<>();
         List<Map<String, Long>> sinceStart = new ArrayList<>();
         long[] firstPaint = new long[runs];
         for (int i = 0; i < runs; i++) {
+            if (mode == Mode.OPEN) {
+                closeOpenMeeting(db);
+            }
             List<String> args = List.of("bench", "screen", "--run-once", db.getParent().toString(), "--size", sizeText);
             long before = ScreenBenchmark.nowMicros();
             ScreenRun run = child(args);
@@ -143,9 +164,10 @@ final class ScreenBench {
         }
         long paint = ImportBenchmark.median(firstPaint);
         long peak = done.stream().mapToLong(ScreenRun::peakHeapBytes).max().orElse(0);
-        out.printf(Locale.ROOT, "plenum bench screen %s, %,d-item agenda: first painted agenda median %.3f s from"
+        out.printf(Locale.ROOT, "plenum bench screen %s %s, %,d-item agenda: first painted agenda median %.3f s from"
                 + " ProcessBuilder.start() (target <= %.1f s); peak heap %.0f MB (max of runs, sum of pool peaks;"
-                + " -Xmx%s; target <= 512 MB)%n", sizeText, done.get(0).agendaRows(), paint / 1e6,
+                + " -Xmx%s; target <= 512 MB)%n", sizeText, mode.name().toLowerCase(Locale.ROOT),
+                done.get(0).agendaRows(), paint / 1e6,
                 FIRST_PAINT_TARGET_S, peak / 1048576.0, heap);
         out.printf(Locale.ROOT, "  stages, median ms after ProcessBuilder.start(): %s%n", String.join(", ",
                 STAGES.stream().map(s -> String.format(Locale.ROOT, "%s %.0f", s, ImportBenchmark.median(
@@ -163,6 +185,15 @@ final class ScreenBench {
                             <= KEY_P99_TARGET_MS ? "" : "  (over the 16 ms target)");
         }
         out.flush();
+    }
+
+    /** Closes the cycle's open meeting, if any, so that the next screen starts a new one (its minutes land beside the db). */
+    private void closeOpenMeeting(Path db) {
+        try (Meeting meeting = Meeting.join(root.workspaces, db, ScreenBenchmark.CYCLE.toString(),
+                ScreenBenchmark.BUDGET_MINUTES, Arrays.stream(ScreenBenchmark.LAGS).boxed().toList(),
+                System.getProperty("user.name"), Clock.systemUTC())) {
+            meeting.close(List.of());
+        }
     }
 
     /** One measured run in a fresh JVM started like the launcher's; the instants of its line are the wall clock's. */

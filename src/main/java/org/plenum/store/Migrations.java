@@ -15,7 +15,7 @@ import java.util.List;
  */
 final class Migrations {
     static final List<String> SCRIPTS = List.of("V1__workspace.sql", "V2__meetings.sql",
-            "V3__decisions_by_meeting.sql");
+            "V3__meeting_agenda.sql");
 
     private Migrations() {}
 

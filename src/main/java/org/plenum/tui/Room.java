@@ -65,17 +65,25 @@ final class Room {
         this.lastOnTable = state.onTable().orElse(null);
     }
 
-    /** Starts the agenda and the guidance in the background. */
+    /**
+     * Reads the agenda in the background, then the guidance and the sparklines: the agenda is
+     * what the screen waits for, so it has the cores to itself.
+     */
     void load() {
-        later(sources.agenda(), report -> {
-            agenda = report;
-            Map<String, AgendaRow> byCode = new HashMap<>();
-            report.rows().forEach(r -> byCode.put(r.code(), r));
-            rowsByCode = byCode;
-            top().refreshed();
-        }, problem -> agendaProblem = problem);
-        later(sources.guidance(), g -> guidance = g, problem -> say("guidance unavailable: " + problem, Look.Role.WARN));
-        later(sources.history(), h -> history = h, problem -> history = Map.of());
+        background.execute(() -> {
+            Runnable show = outcome(sources.agenda(), report -> {
+                agenda = report;
+                Map<String, AgendaRow> byCode = new HashMap<>();
+                report.rows().forEach(r -> byCode.put(r.code(), r));
+                rowsByCode = byCode;
+                top().refreshed();
+            }, problem -> agendaProblem = problem);
+            // Queued before the agenda is shown, so that whoever waits for the agenda finds them queued.
+            later(sources.guidance(), g -> guidance = g,
+                    problem -> say("guidance unavailable: " + problem, Look.Role.WARN));
+            later(sources.history(), h -> history = h, problem -> history = Map.of());
+            post.accept(show);
+        });
     }
 
     /** The item's recent actuals for its sparkline; null until read. */
@@ -92,15 +100,18 @@ final class Room {
     }
 
     private <T> void later(Supplier<T> work, Consumer<T> done, Consumer<String> failed) {
-        background.execute(() -> {
-            try {
-                T result = work.get();
-                post.accept(() -> done.accept(result));
-            } catch (RuntimeException e) {
-                String text = e.getMessage() == null ? e.toString() : e.getMessage();
-                post.accept(() -> failed.accept(text));
-            }
-        });
+        background.execute(() -> post.accept(outcome(work, done, failed)));
+    }
+
+    /** Does {@code work} on this (background) thread; what the UI thread then does with its result or failure. */
+    private static <T> Runnable outcome(Supplier<T> work, Consumer<T> done, Consumer<String> failed) {
+        try {
+            T result = work.get();
+            return () -> done.accept(result);
+        } catch (RuntimeException e) {
+            String text = e.getMessage() == null ? e.toString() : e.getMessage();
+            return () -> failed.accept(text);
+        }
     }
 
     Optional<AgendaRow> row(String code) {

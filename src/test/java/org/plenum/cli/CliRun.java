@@ -9,7 +9,7 @@ record CliRun(int code, String out, String err) {
     static CliRun of(Map<String, String> env, String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        int code = Cli.create(new PrintWriter(out, true), new PrintWriter(err, true), env).execute(args);
+        int code = Cli.create(new PrintWriter(out, true), new PrintWriter(err, true), env, args).execute(args);
         return new CliRun(code, out.toString(), err.toString());
     }
 
