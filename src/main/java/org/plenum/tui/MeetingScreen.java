@@ -26,6 +26,7 @@ public final class MeetingScreen {
 
     private final Screen screen;
     private final Room room;
+    private final Glyphs glyphs;
     private final BlockingQueue<Runnable> tasks = new LinkedBlockingQueue<>();
     private final HelpOverlay help;
     private boolean helpShown;
@@ -35,6 +36,7 @@ public final class MeetingScreen {
     public MeetingScreen(Screen screen, Meeting meeting, Look look, Sources sources, Executor background) {
         this.screen = screen;
         this.room = new Room(meeting, look, sources, background, tasks::add);
+        this.glyphs = new Glyphs(look);
         this.help = new HelpOverlay(room);
         room.open(new AgendaView(room));
         room.load();
@@ -220,7 +222,7 @@ public final class MeetingScreen {
             TerminalSize resized = screen.doResizeIfNecessary();
             TerminalSize size = screen.getTerminalSize();
             TextGraphics g = screen.newTextGraphics();
-            Painter whole = Painter.whole(g, room.look, size);
+            Painter whole = Painter.whole(g, glyphs, size);
             whole.clear();
             topLine(whole.band(0, 1));
             Painter body = whole.band(1, Math.max(0, size.getRows() - 2));

@@ -9,23 +9,25 @@ import com.googlecode.lanterna.graphics.TextGraphics;
  */
 final class Painter {
     private final TextGraphics graphics;
+    private final Glyphs glyphs;
     private final Look look;
     private final int left;
     private final int top;
     private final int columns;
     private final int rows;
 
-    Painter(TextGraphics graphics, Look look, int left, int top, int columns, int rows) {
+    Painter(TextGraphics graphics, Glyphs glyphs, int left, int top, int columns, int rows) {
         this.graphics = graphics;
-        this.look = look;
+        this.glyphs = glyphs;
+        this.look = glyphs.look();
         this.left = left;
         this.top = top;
         this.columns = Math.max(0, columns);
         this.rows = Math.max(0, rows);
     }
 
-    static Painter whole(TextGraphics graphics, Look look, TerminalSize size) {
-        return new Painter(graphics, look, 0, 0, size.getColumns(), size.getRows());
+    static Painter whole(TextGraphics graphics, Glyphs glyphs, TerminalSize size) {
+        return new Painter(graphics, glyphs, 0, 0, size.getColumns(), size.getRows());
     }
 
     int columns() {
@@ -43,13 +45,13 @@ final class Painter {
     /** The rows {@code from} to {@code from + count − 1} of this area, as an area of their own. */
     Painter band(int from, int count) {
         int start = Math.min(rows, Math.max(0, from));
-        return new Painter(graphics, look, left, top + start, columns, Math.min(count, rows - start));
+        return new Painter(graphics, glyphs, left, top + start, columns, Math.min(count, rows - start));
     }
 
     /** A sub-area starting at column {@code from}, {@code width} wide. */
     Painter column(int from, int width) {
         int start = Math.min(columns, Math.max(0, from));
-        return new Painter(graphics, look, left + start, top, Math.min(width, columns - start), rows);
+        return new Painter(graphics, glyphs, left + start, top, Math.min(width, columns - start), rows);
     }
 
     /** Writes {@code text} at (column, row), cut at the area's edge. */
@@ -58,6 +60,12 @@ final class Painter {
             return;
         }
         String shown = Text.fit(text, columns - column, look);
+        if (Glyphs.plain(shown)) {
+            for (int i = 0; i < shown.length(); i++) {
+                graphics.setCharacter(left + column + i, top + row, glyphs.of(role, shown.charAt(i)));
+            }
+            return;
+        }
         graphics.setForegroundColor(look.foreground(role));
         graphics.setBackgroundColor(look.background(role));
         com.googlecode.lanterna.SGR[] modifiers = look.modifiers(role);
