@@ -26,6 +26,7 @@ import org.plenum.score.Placebo;
 import org.plenum.store.Catalog;
 import org.plenum.store.ItemReads;
 import org.plenum.store.Ledger;
+import org.plenum.store.MeetingAgendas;
 import org.plenum.store.Meetings;
 import org.plenum.store.Step;
 import org.plenum.store.Workspace;
@@ -299,6 +300,11 @@ public final class Meeting implements AutoCloseable {
     /** Items this person left unsaved input on, oldest first. */
     public List<String> draftItems() {
         return meetings.draftItems(meeting.id(), person);
+    }
+
+    /** How many times the meeting's agenda has been ranked and kept: 0 before the first time. */
+    public int agendaRanking() {
+        return new MeetingAgendas(workspace).ranking(meeting.id());
     }
 
     /** The event tags the workspace knows, for the form's pick list. */

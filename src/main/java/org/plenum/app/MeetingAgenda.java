@@ -34,12 +34,29 @@ public final class MeetingAgenda {
                 return report(ws, meeting, cycle, earlier.get());
             }
             Agenda.Report ranked = Agenda.run(workspaces, db, cycle.toString(), lags, settings);
-            MeetingAgendas.Kept ours = new MeetingAgendas.Kept(ranked.lags(), ranked.byValue(), ranked.statStep(),
-                    clock.instant(), ranked.rows().size(), AgendaRowsFormat.VERSION,
-                    AgendaRowsFormat.encode(ranked.rows()));
+            MeetingAgendas.Kept ours = kept(ranked, clock);
             MeetingAgendas.Kept kept = agendas.keep(meeting, ours);
             return kept == ours ? ranked : report(ws, meeting, cycle, kept);
         }
+    }
+
+    /**
+     * Ranks the cycle again with the data as they stand now and keeps that agenda in the place of
+     * the meeting's (the facilitator's choice, e.g. after corrected forecasts were imported); the
+     * other screens notice and read it.
+     */
+    public static Agenda.Report rankAgain(Workspaces workspaces, Path db, long meeting, Period cycle, int[] lags,
+            AgendaSettings settings, Clock clock) {
+        Agenda.Report ranked = Agenda.run(workspaces, db, cycle.toString(), lags, settings);
+        try (Workspace ws = workspaces.open(db)) {
+            new MeetingAgendas(ws).replace(meeting, kept(ranked, clock));
+        }
+        return ranked;
+    }
+
+    private static MeetingAgendas.Kept kept(Agenda.Report ranked, Clock clock) {
+        return new MeetingAgendas.Kept(ranked.lags(), ranked.byValue(), ranked.statStep(), clock.instant(),
+                ranked.rows().size(), AgendaRowsFormat.VERSION, AgendaRowsFormat.encode(ranked.rows()));
     }
 
     private static Agenda.Report report(Workspace ws, long meeting, Period cycle, MeetingAgendas.Kept kept) {

@@ -76,6 +76,8 @@ final class MeetCommand implements Callable<Integer> {
         long id = meeting.info().id();
         return new Sources(() -> MeetingAgenda.of(workspaces, db, id, meeting.cycle(), lagList, settings,
                 java.time.Clock.systemUTC()),
+                () -> MeetingAgenda.rankAgain(workspaces, db, id, meeting.cycle(), lagList, settings,
+                        java.time.Clock.systemUTC()),
                 () -> Agenda.guidance(workspaces, db),
                 () -> Score.run(workspaces, db, lagList[0] == 0 && lagList.length > 1 ? lagList[1]
                         : lagList[0], Placebo.NAIVE, List.of(), BootstrapInterval.DEFAULT_DRAWS, false),

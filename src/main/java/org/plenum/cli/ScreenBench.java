@@ -243,7 +243,8 @@ final class ScreenBench {
                 ranked[0] = ScreenBenchmark.nowMicros();
                 return report;
             };
-            Sources sources = new Sources(agenda, plain.guidance(), plain.scorecard(), plain.history());
+            Sources sources = new Sources(agenda, plain.rankAgain(), plain.guidance(), plain.scorecard(),
+                    plain.history());
             try (ScreenProbe probe = new ScreenProbe(meeting, Look.of(true, true), sources, background, size[0],
                     size[1])) {
                 probe.step();

@@ -47,20 +47,55 @@ public final class MeetingAgendas {
             if (earlier.isPresent()) {
                 return earlier.get();
             }
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO meeting_agendas(meeting_id, ranked_at, lags,"
-                    + " by_value, stat_step, row_count, format, rows) VALUES (?, ?, ?, ?, ?, ?, ?, ?)")) {
-                ps.setLong(1, meeting);
-                ps.setString(2, agenda.rankedAt().toString());
-                ps.setString(3, String.join(",", Arrays.stream(agenda.lags()).mapToObj(Integer::toString).toList()));
-                ps.setInt(4, agenda.byValue() ? 1 : 0);
-                ps.setString(5, agenda.statStep());
-                ps.setInt(6, agenda.rowCount());
-                ps.setInt(7, agenda.format());
-                ps.setBytes(8, agenda.rows());
-                ps.executeUpdate();
-            }
+            insert(c, meeting, 1, agenda);
             return agenda;
         });
+    }
+
+    private static void insert(Connection c, long meeting, int ranking, Kept agenda) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO meeting_agendas(meeting_id, ranking, ranked_at,"
+                + " lags, by_value, stat_step, row_count, format, rows) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+            ps.setLong(1, meeting);
+            ps.setInt(2, ranking);
+            ps.setString(3, agenda.rankedAt().toString());
+            ps.setString(4, String.join(",", Arrays.stream(agenda.lags()).mapToObj(Integer::toString).toList()));
+            ps.setInt(5, agenda.byValue() ? 1 : 0);
+            ps.setString(6, agenda.statStep());
+            ps.setInt(7, agenda.rowCount());
+            ps.setInt(8, agenda.format());
+            ps.setBytes(9, agenda.rows());
+            ps.executeUpdate();
+        }
+    }
+
+    /**
+     * How many times the meeting's agenda has been ranked (1 once kept, one more each time it is
+     * ranked again); 0 before it is first kept. A cheap look for screens watching it change.
+     */
+    public int ranking(long meeting) {
+        return workspace.read(c -> ranking(c, meeting));
+    }
+
+    /** Puts {@code agenda} in the place of the meeting's kept agenda, if any, in one transaction. */
+    public Kept replace(long meeting, Kept agenda) {
+        return workspace.write(c -> {
+            int previous = ranking(c, meeting);
+            try (PreparedStatement ps = c.prepareStatement("DELETE FROM meeting_agendas WHERE meeting_id = ?")) {
+                ps.setLong(1, meeting);
+                ps.executeUpdate();
+            }
+            insert(c, meeting, previous + 1, agenda);
+            return agenda;
+        });
+    }
+
+    private static int ranking(Connection c, long meeting) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT ranking FROM meeting_agendas WHERE meeting_id = ?")) {
+            ps.setLong(1, meeting);
+            try (ResultSet rs = ps.executeQuery()) {
+                return rs.next() ? rs.getInt(1) : 0;
+            }
+        }
     }
 
     private static Optional<Kept> read(Connection c, long meeting) throws SQLException {

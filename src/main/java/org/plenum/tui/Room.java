@@ -44,6 +44,10 @@ final class Room {
     private Map<String, AgendaRow> rowsByCode = Map.of();
     private Map<String, double[]> history = Map.of();
     private int loadsArrived;
+    /** Which ranking of the meeting's kept agenda is shown (see {@link Meeting#agendaRanking}). */
+    private int agendaRanking;
+    /** An agenda is being ranked or read in the background. */
+    private boolean agendaLoading;
 
     String message = "";
     Look.Role messageRole = Look.Role.PLAIN;
@@ -71,20 +75,71 @@ final class Room {
      * what the screen waits for, so it has the cores to itself.
      */
     void load() {
+        agendaLoading = true;
         background.execute(() -> {
-            Runnable show = outcome(sources.agenda(), report -> {
-                agenda = report;
-                Map<String, AgendaRow> byCode = new HashMap<>();
-                report.rows().forEach(r -> byCode.put(r.code(), r));
-                rowsByCode = byCode;
-                top().refreshed();
-            }, problem -> agendaProblem = problem);
+            Runnable show = outcome(sources.agenda(), this::show, this::agendaFailed);
             // Queued before the agenda is shown, so that whoever waits for the agenda finds them queued.
             later(sources.guidance(), g -> loaded(() -> guidance = g),
                     problem -> loaded(() -> say("guidance unavailable: " + problem, Look.Role.WARN)));
             later(sources.history(), h -> loaded(() -> history = h), problem -> loaded(() -> history = Map.of()));
             post.accept(show);
         });
+    }
+
+    /** Puts {@code report} on every view, noting when the meeting's kept agenda was ranked. */
+    private void show(Agenda.Report report) {
+        agenda = report;
+        agendaProblem = null;
+        agendaLoading = false;
+        agendaRanking = meeting.agendaRanking();
+        Map<String, AgendaRow> byCode = new HashMap<>();
+        report.rows().forEach(r -> byCode.put(r.code(), r));
+        rowsByCode = byCode;
+        views.forEach(View::refreshed);
+    }
+
+    private void agendaFailed(String problem) {
+        agendaLoading = false;
+        if (agenda == null) {
+            agendaProblem = problem;
+        } else {
+            say("the agenda stays as it was: " + problem, Look.Role.BAD);
+        }
+    }
+
+    /**
+     * The facilitator ranks the cycle again with the data as they stand now (say, after
+     * corrected forecasts were imported); every screen then shows the new agenda.
+     */
+    void rankAgain() {
+        if (!isFacilitator()) {
+            say("only the facilitator (" + state.meeting().facilitator() + ") ranks the agenda again", Look.Role.WARN);
+            return;
+        }
+        if (agendaLoading) {
+            say("the agenda is being ranked or read already");
+            return;
+        }
+        agendaLoading = true;
+        say("ranking the agenda again with the data as they stand now" + look.ellipsis());
+        later(sources.rankAgain(), report -> {
+            show(report);
+            say("the agenda is ranked again: " + report.rows().size() + " items");
+        }, this::agendaFailed);
+    }
+
+    /** Another screen kept a new agenda for the meeting (the facilitator ranked it again): read it. */
+    private void followAgenda() {
+        if (agendaLoading || agenda == null) {
+            return;
+        }
+        if (meeting.agendaRanking() > agendaRanking) {
+            agendaLoading = true;
+            later(sources.agenda(), report -> {
+                show(report);
+                say("the facilitator ranked the agenda again");
+            }, this::agendaFailed);
+        }
     }
 
     /**
@@ -200,6 +255,7 @@ final class Room {
             }
         }
         views.forEach(View::refreshed);
+        followAgenda();
     }
 
     /** Once a second: the clock moves, and now and then this screen checks in. */

@@ -10,6 +10,7 @@ CREATE INDEX decisions_by_meeting ON decisions(meeting_id) WHERE meeting_id IS N
 -- agenda` ranks the cycle as the data stand now.)
 CREATE TABLE meeting_agendas(
   meeting_id INTEGER PRIMARY KEY REFERENCES meetings(id),
+  ranking    INTEGER NOT NULL CHECK (ranking >= 1),   -- 1, then one more each time it is ranked again
   ranked_at  TEXT NOT NULL,
   lags       TEXT NOT NULL,                       -- decision lags, comma-separated
   by_value   INTEGER NOT NULL CHECK (by_value IN (0, 1)),

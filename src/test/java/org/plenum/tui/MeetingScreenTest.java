@@ -21,6 +21,9 @@ import org.plenum.core.Decision;
 import org.plenum.core.Period;
 import org.plenum.core.Quantity;
 import org.plenum.store.Ledger;
+import org.plenum.io.CsvImporter;
+import org.plenum.io.ImportKind;
+import org.plenum.io.Progress;
 import org.plenum.store.Workspace;
 import org.plenum.testing.TestWorkspace;
 
@@ -254,6 +257,67 @@ class MeetingScreenTest {
                     facilitator.text());
             planner.type("f");
             assertTrue(planner.text().contains("not following"), planner.text());
+        }
+    }
+
+    /** The item on the agenda row of {@code rank}, as the screen shows it. */
+    private static String itemAtRank(ScreenHarness h, int rank) {
+        Pattern row = Pattern.compile("^.\\s*(\\d+) (\\S+)\\s");
+        for (String line : h.lines()) {
+            Matcher m = row.matcher(line);
+            if (m.find() && Integer.parseInt(m.group(1)) == rank) {
+                return m.group(2);
+            }
+        }
+        throw new AssertionError("no agenda row of rank " + rank + ":\n" + h.text());
+    }
+
+    private static String lastNotHandsOff(ScreenHarness h) {
+        String last = null;
+        for (int rank = 1; rank <= MeetingFixture.ITEMS.size(); rank++) {
+            String item = itemAtRank(h, rank);
+            if (!h.line(h.rowOf(" " + item + " ")).startsWith("!")) {
+                last = item;
+            }
+        }
+        assertTrue(last != null && !last.equals(itemAtRank(h, 1)), "the fixture ranks two items that are not hands off");
+        return last;
+    }
+
+    @Test
+    void theAgendaStaysAsRankedUntilTheFacilitatorRanksItAgainAndThenEveryScreenShowsTheNewOne() throws Exception {
+        try (ScreenHarness facilitator = open("alice"); ScreenHarness planner = open("bob")) {
+            String first = itemAtRank(facilitator, 1);
+            assertEquals(first, itemAtRank(planner, 1), "both screens show the meeting's one agenda");
+            // Corrected statistical forecasts arrive during the meeting: the last-ranked item that
+            // is not hands off (those stay last whatever their stake) had recent forecasts ten
+            // times too high, so ranked afresh it comes first.
+            String last = lastNotHandsOff(facilitator);
+            int i = MeetingFixture.ITEMS.indexOf(last);
+            StringBuilder csv = new StringBuilder("item,period,cycle,step,quantity\n");
+            for (Period c = MeetingFixture.CYCLE.plus(-8); c.compareTo(MeetingFixture.CYCLE) < 0; c = c.plus(1)) {
+                for (int lag = 1; lag <= 3; lag++) {
+                    csv.append(last).append(',').append(c.plus(lag)).append(',').append(c).append(",stat,")
+                            .append(10 * MeetingFixture.demand(i, c.plus(lag))).append('\n');
+                }
+            }
+            try (Workspace ws = Workspace.open(db, TestWorkspace.TIMEOUT)) {
+                new CsvImporter(ws, Progress.NONE).importFile(ImportKind.FORECASTS,
+                        TestWorkspace.write(dir, "late.csv", csv.toString()), true);
+            }
+            facilitator.step();
+            planner.step();
+            assertEquals(first, itemAtRank(facilitator, 1), "data arriving do not reorder the meeting's agenda");
+            assertEquals(first, itemAtRank(planner, 1));
+
+            planner.type("R");
+            assertTrue(planner.text().contains("only the facilitator (alice) ranks the agenda again"), planner.text());
+            facilitator.type("R");
+            assertTrue(facilitator.text().contains("the agenda is ranked again: 8 items"), facilitator.text());
+            assertEquals(last, itemAtRank(facilitator, 1), facilitator.text());
+            planner.step();
+            assertEquals(last, itemAtRank(planner, 1), planner.text());
+            assertTrue(planner.text().contains("the facilitator ranked the agenda again"), planner.text());
         }
     }
 

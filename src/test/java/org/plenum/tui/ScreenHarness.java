@@ -13,6 +13,7 @@ import java.util.Map;
 import org.plenum.agenda.AgendaSettings;
 import org.plenum.app.Agenda;
 import org.plenum.app.Meeting;
+import org.plenum.app.MeetingAgenda;
 import org.plenum.app.Score;
 import org.plenum.app.Workspaces;
 import org.plenum.score.Placebo;
@@ -49,7 +50,9 @@ final class ScreenHarness implements AutoCloseable {
         Integer minutes = meeting.info().budgetMinutes();
         AgendaSettings settings = minutes == null ? AgendaSettings.defaults() : AgendaSettings.defaults()
                 .withBudget(minutes);
-        Sources sources = new Sources(() -> Agenda.run(workspaces, db, MeetingFixture.CYCLE.toString(), lags, settings),
+        long id = meeting.info().id();
+        Sources sources = new Sources(() -> MeetingAgenda.of(workspaces, db, id, MeetingFixture.CYCLE, lags, settings,
+                clock), () -> MeetingAgenda.rankAgain(workspaces, db, id, MeetingFixture.CYCLE, lags, settings, clock),
                 () -> Agenda.guidance(workspaces, db),
                 () -> Score.run(workspaces, db, 1, Placebo.NAIVE, List.of(), 200, false),
                 () -> Meeting.recentActuals(workspaces, db, MeetingFixture.CYCLE, 12));
