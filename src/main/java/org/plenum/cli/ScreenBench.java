@@ -35,9 +35,11 @@ import org.plenum.tui.Sources;
 
 /**
  * {@code plenum bench screen}: the meeting screen on a generated agenda, in Lanterna's virtual
- * terminal. Each measured run is a fresh JVM started as the launcher starts one, which joins the
- * meeting, paints the agenda and then answers a fixed script of keys; the parent times the first
- * painted agenda from just before its {@code ProcessBuilder.start()}.
+ * terminal. Each measured run is a fresh JVM started as the launcher starts one, which opens or
+ * joins the meeting, paints the agenda and then answers a fixed script of keys; the parent times
+ * the first painted agenda from just before its {@code ProcessBuilder.start()}. Runs of each
+ * {@link Mode}: the screen that opens a new meeting ranks the cycle; one that joins the open
+ * meeting reads the agenda the meeting keeps.
  */
 final class ScreenBench {
     /** Targets of the issue: first agenda within 1.5 s of starting the process, p99 of a key within one 60 Hz frame. */

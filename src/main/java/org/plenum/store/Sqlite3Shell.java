@@ -43,6 +43,21 @@ public final class Sqlite3Shell {
                 + " WHERE f.period - f.cycle = " + lag + " GROUP BY f.step_id;\n");
     }
 
+    /**
+     * Reads what a scorecard at one lag reads (every actual, each imported step's forecasts at
+     * the lag, packed per item as {@code plenum score} reads them, and the standing decisions),
+     * printing it to nowhere; returns nanoseconds. The floor under any scorecard on this engine.
+     */
+    public static long scoreInputs(Path db, int lag) {
+        // The ledger step is never imported: every forecasts row is an imported step's.
+        return run(db, "SELECT item_id, group_concat(period || ',' || quantity, ';') FROM actuals GROUP BY item_id"
+                + " ORDER BY item_id;\n"
+                + "SELECT step_id, item_id, group_concat(period || ',' || quantity, ';') FROM forecasts WHERE period"
+                + " - cycle = " + lag + " GROUP BY step_id, item_id ORDER BY step_id, item_id;\n"
+                + "SELECT d.item_id, d.period, d.quantity FROM decisions d WHERE d.period - d.cycle = " + lag
+                + " AND NOT EXISTS (SELECT 1 FROM decisions n WHERE n.supersedes = d.id) ORDER BY d.item_id, d.period;\n");
+    }
+
     /** Reads the forecast rows the agenda reads around a cycle, printing them to nowhere; returns nanoseconds. */
     public static long agendaForecastRows(Path db, int stepId, int fromCycle, int cycle, int[] lags) {
         return run(db, AgendaReads.forecastsAroundPlain(stepId, fromCycle, cycle, lags) + ";\n");
