@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
 import org.plenum.store.NativeLibrary;
+import picocli.CommandLine;
 
 /** The {@code plenum} program: the only place that calls {@code System.exit}. */
 public final class Main {
@@ -20,7 +21,7 @@ public final class Main {
         sqlite.start();
         PrintWriter out = new PrintWriter(System.out, true, StandardCharsets.UTF_8);
         PrintWriter err = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
-        picocli.CommandLine cli = Cli.create(out, err, System.getenv(), args);
+        CommandLine cli = Cli.create(out, err, System.getenv(), args);
         try {
             sqlite.join();
         } catch (InterruptedException e) {

@@ -1,7 +1,5 @@
 package org.plenum.store;
 
-import java.nio.charset.StandardCharsets;
-import java.util.Arrays;
 import org.plenum.core.Series;
 
 /**
@@ -11,10 +9,6 @@ import org.plenum.core.Series;
  */
 final class PackedRows {
     private PackedRows() {}
-
-    static void parse(int item, String text, Series.Builder out) {
-        parse(item, text.getBytes(StandardCharsets.US_ASCII), out);
-    }
 
     static void parse(int item, byte[] text, Series.Builder out) {
         int first = out.size();

@@ -86,7 +86,7 @@ final class Room {
         });
     }
 
-    /** Puts {@code report} on every view, noting when the meeting's kept agenda was ranked. */
+    /** Puts {@code report} on every view, noting which ranking of the meeting's kept agenda it is. */
     private void show(Agenda.Report report) {
         agenda = report;
         agendaProblem = null;

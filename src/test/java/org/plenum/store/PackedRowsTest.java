@@ -3,6 +3,7 @@ package org.plenum.store;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
 import org.junit.jupiter.api.Test;
 import org.plenum.core.Series;
@@ -12,8 +13,9 @@ class PackedRowsTest {
     @Test
     void readsPairsBackInPeriodOrderWhateverOrderTheyCameIn() {
         Series.Builder b = new Series.Builder();
-        PackedRows.parse(7, "24313,5000000;24311,0;-3650,123456789012", b);
-        PackedRows.parse(9, "24312,1", b);
+        // SQLite hands the packed text over as its bytes.
+        PackedRows.parse(7, "24313,5000000;24311,0;-3650,123456789012".getBytes(StandardCharsets.US_ASCII), b);
+        PackedRows.parse(9, "24312,1".getBytes(StandardCharsets.US_ASCII), b);
         Series s = b.build();
         assertEquals(4, s.size());
         assertArrayEquals(new int[] {7, 7, 7, 9}, Arrays.copyOf(s.items(), 4));
