@@ -7,8 +7,8 @@ import java.util.List;
 final class HelpOverlay {
     static final List<String[]> SHARED = List.of(new String[] {"1 2 3 4", "agenda, ledger, scorecard, full item view"},
             new String[] {"Esc", "back"}, new String[] {"f", "follow the tabled item on or off"},
-            new String[] {"R", "rank the agenda again with the data as they stand now (facilitator)"},
-            new String[] {"X", "close the meeting and write its minutes (facilitator)"},
+            new String[] {"R", "rank the agenda again on current data (facilitator)"},
+            new String[] {"X", "close the meeting, write its minutes (facilitator)"},
             new String[] {"?", "this help"}, new String[] {"q", "quit (asks first)"});
 
     private final Room room;
