@@ -29,6 +29,9 @@ final class AgendaView implements View {
     private long aboveCut;
     private long handsOff;
     private int page = 10;
+    /** Where the list started, and how many rows it had, when it was last drawn (0: not yet). */
+    private int drawnFirst;
+    private int drawnAt;
 
     AgendaView(Room room) {
         this.room = room;
@@ -181,6 +184,12 @@ final class AgendaView implements View {
             first = selectedLine - rows + 1;
         }
         first = Math.max(0, Math.min(first, Math.max(0, lines - rows)));
+        if (drawnAt == rows) {
+            // The list moved by a few lines: over SSH, a scroll and the new lines instead of a screenful.
+            body.scrolled(2, 2 + rows - 1, first - drawnFirst);
+        }
+        drawnFirst = first;
+        drawnAt = rows;
         for (int i = 0; i < rows && first + i < lines; i++) {
             int line = first + i;
             if (line == cut) {

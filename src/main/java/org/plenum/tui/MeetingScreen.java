@@ -226,7 +226,7 @@ public final class MeetingScreen {
             TerminalSize resized = screen.doResizeIfNecessary();
             TerminalSize size = screen.getTerminalSize();
             TextGraphics g = screen.newTextGraphics();
-            Painter whole = Painter.whole(g, glyphs, size);
+            Painter whole = Painter.whole(g, glyphs, screen::scrollLines, size);
             whole.clear();
             topLine(whole.band(0, 1));
             Painter body = whole.band(1, Math.max(0, size.getRows() - 2));

@@ -8,17 +8,29 @@ import com.googlecode.lanterna.graphics.TextGraphics;
  * area, and text longer than its place ends in the look's ellipsis.
  */
 final class Painter {
+    /**
+     * Moves lines of the terminal up ({@code distance} > 0) or down, as a hint: Lanterna moves
+     * its copy of what the terminal shows alike, so only the lines that came into view are sent.
+     */
+    interface Scroller {
+        void scroll(int firstRow, int lastRow, int distance);
+
+        Scroller NONE = (first, last, distance) -> { };
+    }
+
     private final TextGraphics graphics;
     private final Glyphs glyphs;
+    private final Scroller scroller;
     private final Look look;
     private final int left;
     private final int top;
     private final int columns;
     private final int rows;
 
-    Painter(TextGraphics graphics, Glyphs glyphs, int left, int top, int columns, int rows) {
+    Painter(TextGraphics graphics, Glyphs glyphs, Scroller scroller, int left, int top, int columns, int rows) {
         this.graphics = graphics;
         this.glyphs = glyphs;
+        this.scroller = scroller;
         this.look = glyphs.look();
         this.left = left;
         this.top = top;
@@ -26,8 +38,8 @@ final class Painter {
         this.rows = Math.max(0, rows);
     }
 
-    static Painter whole(TextGraphics graphics, Glyphs glyphs, TerminalSize size) {
-        return new Painter(graphics, glyphs, 0, 0, size.getColumns(), size.getRows());
+    static Painter whole(TextGraphics graphics, Glyphs glyphs, Scroller scroller, TerminalSize size) {
+        return new Painter(graphics, glyphs, scroller, 0, 0, size.getColumns(), size.getRows());
     }
 
     int columns() {
@@ -45,13 +57,13 @@ final class Painter {
     /** The rows {@code from} to {@code from + count − 1} of this area, as an area of their own. */
     Painter band(int from, int count) {
         int start = Math.min(rows, Math.max(0, from));
-        return new Painter(graphics, glyphs, left, top + start, columns, Math.min(count, rows - start));
+        return new Painter(graphics, glyphs, scroller, left, top + start, columns, Math.min(count, rows - start));
     }
 
     /** A sub-area starting at column {@code from}, {@code width} wide. */
     Painter column(int from, int width) {
         int start = Math.min(columns, Math.max(0, from));
-        return new Painter(graphics, glyphs, left + start, top, Math.min(width, columns - start), rows);
+        return new Painter(graphics, glyphs, scroller, left + start, top, Math.min(width, columns - start), rows);
     }
 
     /** Writes {@code text} at (column, row), cut at the area's edge. */
@@ -84,6 +96,17 @@ final class Painter {
     /** A whole row in one role, padded to the area's width (for bars and the selected row). */
     void line(int row, String text, Look.Role role) {
         text(0, row, Text.pad(text, columns, look), role);
+    }
+
+    /**
+     * Hints that rows {@code from..to} of this area show what they showed, moved up by
+     * {@code distance} rows (down when negative); only for an area as wide as the screen. What is
+     * drawn afterwards is what counts: a wrong hint costs bytes, never a wrong screen.
+     */
+    void scrolled(int from, int to, int distance) {
+        if (left == 0 && from >= 0 && to < rows && from < to && distance != 0 && Math.abs(distance) <= to - from) {
+            scroller.scroll(top + from, top + to, distance);
+        }
     }
 
     void clear() {
