@@ -38,13 +38,17 @@ public final class AbcClassification {
         sorted.sort(Comparator.comparing(Value::amount).reversed().thenComparing(Value::item));
         BigInteger total = sorted.stream().map(Value::amount).reduce(BigInteger.ZERO, BigInteger::add);
         BigDecimal totalDecimal = new BigDecimal(total);
+        // The two boundaries, as exact amounts, once: an item starts in A while the amount before
+        // it is below a·total, in B while below b·total.
+        BigDecimal endOfA = a.multiply(totalDecimal);
+        BigDecimal endOfB = b.multiply(totalDecimal);
         Map<String, String> out = new HashMap<>();
         BigInteger before = BigInteger.ZERO;
         for (Value v : sorted) {
             BigDecimal start = new BigDecimal(before);
             String cls = total.signum() == 0 ? "C"
-                    : start.compareTo(a.multiply(totalDecimal)) < 0 ? "A"
-                    : start.compareTo(b.multiply(totalDecimal)) < 0 ? "B" : "C";
+                    : start.compareTo(endOfA) < 0 ? "A"
+                    : start.compareTo(endOfB) < 0 ? "B" : "C";
             out.put(v.item(), cls);
             before = before.add(v.amount());
         }

@@ -100,15 +100,29 @@ public final class AgendaRanking {
         List<AbcClassification.Value> values = new ArrayList<>();
         for (int i = 0; i < in.candidates().size(); i++) {
             Candidate c = in.candidates().get(i);
-            BigInteger volume = BigInteger.ZERO;
-            for (long q : seasons.get(i)) {
-                volume = volume.add(BigInteger.valueOf(q));
-            }
+            BigInteger volume = exactSum(seasons.get(i));
             BigInteger amount = !byValue ? volume
                     : c.unitValueMicros() == null ? BigInteger.ZERO : volume.multiply(BigInteger.valueOf(c.unitValueMicros()));
             values.add(new AbcClassification.Value(c.code(), amount));
         }
         return new AbcClassification(settings.abc()[0], settings.abc()[1]).classes(values);
+    }
+
+    /** The exact sum: in a long while it fits (always, for any real season), else in a BigInteger. */
+    private static BigInteger exactSum(long[] values) {
+        long sum = 0;
+        try {
+            for (long v : values) {
+                sum = Math.addExact(sum, v);
+            }
+            return BigInteger.valueOf(sum);
+        } catch (ArithmeticException overflow) {
+            BigInteger big = BigInteger.ZERO;
+            for (long v : values) {
+                big = big.add(BigInteger.valueOf(v));
+            }
+            return big;
+        }
     }
 
     /** Whether ABC ran by value for these candidates under these settings. */
