@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 import java.util.SortedMap;
 import org.plenum.core.BadInputException;
 import org.plenum.core.Frequency;
@@ -60,7 +61,7 @@ public final class Decide {
         if (r.reason() == null || r.reason().isBlank()) {
             problems.add("--reason: expected a few words saying why, found an empty reason");
         }
-        java.util.Set<String> tags = ws.tags();
+        Set<String> tags = ws.tags();
         if (!tags.contains(r.tag())) {
             problems.add("--tag: expected one of " + String.join(", ", tags) + ", found \"" + r.tag() + "\"");
         }

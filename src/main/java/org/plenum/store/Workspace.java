@@ -7,6 +7,7 @@ import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
+import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.Duration;
@@ -121,16 +122,16 @@ public final class Workspace implements AutoCloseable {
     }
 
     /** The event tags, built-in first: what a decision's tag must be one of. */
-    public java.util.Set<String> tags() {
+    public Set<String> tags() {
         return read(Catalogs::tags);
     }
 
     /** Whether the workspace holds the item {@code code}. */
     public boolean hasItem(String code) {
         return read(c -> {
-            try (java.sql.PreparedStatement ps = c.prepareStatement("SELECT 1 FROM items WHERE item = ?")) {
+            try (PreparedStatement ps = c.prepareStatement("SELECT 1 FROM items WHERE item = ?")) {
                 ps.setString(1, code);
-                try (java.sql.ResultSet rs = ps.executeQuery()) {
+                try (ResultSet rs = ps.executeQuery()) {
                     return rs.next();
                 }
             }

@@ -14,8 +14,6 @@ final class Painter {
      */
     interface Scroller {
         void scroll(int firstRow, int lastRow, int distance);
-
-        Scroller NONE = (first, last, distance) -> { };
     }
 
     private final TextGraphics graphics;
