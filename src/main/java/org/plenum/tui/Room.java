@@ -26,6 +26,8 @@ import org.plenum.app.Score;
 final class Room {
     /** How often a screen tells the others it is still there. */
     static final Duration HEARTBEAT = Duration.ofSeconds(10);
+    /** The reads that follow the agenda's: the guidance and the sparklines. */
+    private static final int READS_AFTER_AGENDA = 2;
 
     final Meeting meeting;
     final Look look;
@@ -151,7 +153,7 @@ final class Room {
      */
     private void loaded(Runnable arrival) {
         arrival.run();
-        if (++loadsArrived == 2) {
+        if (++loadsArrived == READS_AFTER_AGENDA) {
             System.gc();
         }
     }
