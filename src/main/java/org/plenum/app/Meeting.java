@@ -9,6 +9,7 @@ import java.time.Clock;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -123,7 +124,8 @@ public final class Meeting implements AutoCloseable {
      * @param cycleText the cycle, or null for the one open meeting (or, with none open, the latest
      *     cycle with forecasts of the first step)
      * @param budgetMinutes the time box of a meeting this call starts; ignored when joining
-     * @param lags the decision lags: target periods {@code cycle + lag} are preselected in forms
+     * @param lags the decision lags: target periods {@code cycle + lag} are preselected in forms;
+     *     once the meeting's agenda is kept, the lags it was ranked at apply to every screen
      */
     public static Meeting join(Workspaces workspaces, Path db, String cycleText, Integer budgetMinutes,
             List<Integer> lags, String person, Clock clock) {
@@ -137,7 +139,9 @@ public final class Meeting implements AutoCloseable {
         try {
             Period cycle = cycle(ws, cycleText);
             Meetings.Meeting m = new Meetings(ws).openOrStart(cycle, person, budgetMinutes, clock.instant());
-            Meeting joined = new Meeting(ws, clock, person, m, lags);
+            List<Integer> meetingLags = new MeetingAgendas(ws).lags(m.id())
+                    .map(kept -> Arrays.stream(kept).boxed().toList()).orElse(lags);
+            Meeting joined = new Meeting(ws, clock, person, m, meetingLags);
             joined.heartbeat();
             return joined;
         } catch (RuntimeException e) {

@@ -41,7 +41,8 @@ final class MeetCommand implements Callable<Integer> {
     Integer budget;
 
     @Option(names = "--lags", defaultValue = "1-3", paramLabel = "L",
-            description = "Decision lags: a range like 1-3 or a list like 0,1,2 (default: ${DEFAULT-VALUE}).")
+            description = "Decision lags: a range like 1-3 or a list like 0,1,2 (default: ${DEFAULT-VALUE}); a"
+                    + " meeting whose agenda is ranked keeps the lags it was ranked at.")
     String lags;
 
     @Option(names = "--ascii", description = "Plain ASCII: no block characters or box lines.")
@@ -63,13 +64,16 @@ final class MeetCommand implements Callable<Integer> {
         try (Meeting meeting = Meeting.join(root.workspaces, dbPath, cycle, budget,
                 Arrays.stream(lagList).boxed().toList(), System.getProperty("user.name"), java.time.Clock.systemUTC());
                 ChangeWatch watch = ChangeWatch.open(root.workspaces, dbPath)) {
-            MeetingTerminal.run(meeting, look, sources(root.workspaces, dbPath, meeting, lagList), watch::changed);
+            MeetingTerminal.run(meeting, look, sources(root.workspaces, dbPath, meeting), watch::changed);
         }
         return ExitCodes.OK;
     }
 
     /** The screen's slow reads, each opening its own connection when it runs (also what {@code bench screen} uses). */
-    static Sources sources(Workspaces workspaces, Path db, Meeting meeting, int[] lagList) {
+    static Sources sources(Workspaces workspaces, Path db, Meeting meeting) {
+        // The meeting's lags: those its agenda was ranked at once it has one, so that every
+        // screen ranks, preselects and scores alike.
+        int[] lagList = meeting.lags().stream().mapToInt(Integer::intValue).toArray();
         Integer minutes = meeting.info().budgetMinutes();
         AgendaSettings settings = minutes == null ? AgendaSettings.defaults()
                 : AgendaSettings.defaults().withBudget(minutes);

@@ -239,7 +239,7 @@ final class ScreenBench {
                 ScreenBenchmark.BUDGET_MINUTES, Arrays.stream(ScreenBenchmark.LAGS).boxed().toList(),
                 System.getProperty("user.name"), Clock.systemUTC())) {
             marks.put("joined", ScreenBenchmark.nowMicros());
-            Sources plain = MeetCommand.sources(workspaces, db, meeting, ScreenBenchmark.LAGS);
+            Sources plain = MeetCommand.sources(workspaces, db, meeting);
             Supplier<Agenda.Report> agenda = () -> {
                 Agenda.Report report = plain.agenda().get();
                 ranked[0] = ScreenBenchmark.nowMicros();

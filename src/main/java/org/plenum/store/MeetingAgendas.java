@@ -76,6 +76,18 @@ public final class MeetingAgendas {
         return workspace.read(c -> ranking(c, meeting));
     }
 
+    /** The decision lags the meeting's kept agenda was ranked at, if it has one (without reading its rows). */
+    public Optional<int[]> lags(long meeting) {
+        return workspace.read(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT lags FROM meeting_agendas WHERE meeting_id = ?")) {
+                ps.setLong(1, meeting);
+                try (ResultSet rs = ps.executeQuery()) {
+                    return rs.next() ? Optional.of(ints(rs.getString(1))) : Optional.empty();
+                }
+            }
+        });
+    }
+
     /** Puts {@code agenda} in the place of the meeting's kept agenda, if any, in one transaction. */
     public Kept replace(long meeting, Kept agenda) {
         return workspace.write(c -> {
@@ -106,11 +118,14 @@ public final class MeetingAgendas {
                 if (!rs.next()) {
                     return Optional.empty();
                 }
-                String lags = rs.getString(1);
-                return Optional.of(new Kept(lags.isEmpty() ? new int[0]
-                        : Arrays.stream(lags.split(",")).mapToInt(Integer::parseInt).toArray(), rs.getInt(2) == 1,
-                        rs.getString(3), Instant.parse(rs.getString(4)), rs.getInt(5), rs.getInt(6), rs.getBytes(7)));
+                return Optional.of(new Kept(ints(rs.getString(1)), rs.getInt(2) == 1, rs.getString(3),
+                        Instant.parse(rs.getString(4)), rs.getInt(5), rs.getInt(6), rs.getBytes(7)));
             }
         }
+    }
+
+    private static int[] ints(String commaSeparated) {
+        return commaSeparated.isEmpty() ? new int[0]
+                : Arrays.stream(commaSeparated.split(",")).mapToInt(Integer::parseInt).toArray();
     }
 }

@@ -87,6 +87,28 @@ class MeetingAgendaTest {
         }
     }
 
+    @Test
+    void aScreenJoiningWithOtherLagsWorksAtTheLagsTheAgendaWasRankedAt() {
+        Workspaces workspaces = new Workspaces(Map.of());
+        Path db = dir.resolve("screen.db");
+        ScreenBenchmark.generate(workspaces, dir, db, 50);
+        AgendaSettings settings = AgendaSettings.defaults();
+        long meeting = openMeeting(workspaces, db);
+        try (Meeting before = Meeting.join(workspaces, db, ScreenBenchmark.CYCLE.toString(), null, List.of(2, 3),
+                "planner", CLOCK)) {
+            assertEquals(List.of(2, 3), before.lags(), "no agenda kept yet: the screen's own lags");
+        }
+        MeetingAgenda.of(workspaces, db, meeting, ScreenBenchmark.CYCLE, new int[] {1, 2}, settings, CLOCK);
+        try (Meeting after = Meeting.join(workspaces, db, ScreenBenchmark.CYCLE.toString(), null, List.of(2, 3),
+                "planner", CLOCK)) {
+            assertEquals(List.of(1, 2), after.lags(), "the kept agenda's lags");
+            String item = MeetingAgenda.of(workspaces, db, meeting, ScreenBenchmark.CYCLE, new int[] {2, 3}, settings,
+                    CLOCK).rows().get(0).code();
+            assertEquals(List.of(ScreenBenchmark.CYCLE.plus(1), ScreenBenchmark.CYCLE.plus(2)),
+                    after.item(item).decisionPeriods(), "the form preselects the periods at those lags");
+        }
+    }
+
     private static long openMeeting(Workspaces workspaces, Path db) {
         try (Meeting m = Meeting.join(workspaces, db, ScreenBenchmark.CYCLE.toString(), ScreenBenchmark.BUDGET_MINUTES,
                 List.of(1, 2, 3), "facilitator", CLOCK)) {
