@@ -191,11 +191,16 @@ final class ScreenBench {
 
     /** Closes the cycle's open meeting, if any, so that the next screen starts a new one (its minutes land beside the db). */
     private void closeOpenMeeting(Path db) {
-        try (Meeting meeting = Meeting.join(root.workspaces, db, ScreenBenchmark.CYCLE.toString(),
-                ScreenBenchmark.BUDGET_MINUTES, Arrays.stream(ScreenBenchmark.LAGS).boxed().toList(),
-                System.getProperty("user.name"), Clock.systemUTC())) {
+        try (Meeting meeting = join(db)) {
             meeting.close(List.of());
         }
+    }
+
+    /** The benchmark's meeting, as {@code plenum meet} with its cycle, budget and lags would join it. */
+    private Meeting join(Path db) {
+        return Meeting.join(root.workspaces, db, ScreenBenchmark.CYCLE.toString(), ScreenBenchmark.BUDGET_MINUTES,
+                Arrays.stream(ScreenBenchmark.LAGS).boxed().toList(), System.getProperty("user.name"),
+                Clock.systemUTC());
     }
 
     /** One measured run in a fresh JVM started like the launcher's; the instants of its line are the wall clock's. */
@@ -235,9 +240,7 @@ final class ScreenBench {
         Workspaces workspaces = root.workspaces;
         long[] ranked = new long[1];
         ExecutorService background = MeetingTerminal.background();
-        try (Meeting meeting = Meeting.join(workspaces, db, ScreenBenchmark.CYCLE.toString(),
-                ScreenBenchmark.BUDGET_MINUTES, Arrays.stream(ScreenBenchmark.LAGS).boxed().toList(),
-                System.getProperty("user.name"), Clock.systemUTC())) {
+        try (Meeting meeting = join(db)) {
             marks.put("joined", ScreenBenchmark.nowMicros());
             Sources plain = MeetCommand.sources(workspaces, db, meeting);
             Supplier<Agenda.Report> agenda = () -> {
